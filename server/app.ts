@@ -1,0 +1,152 @@
+import { existsSync, readFileSync } from 'node:fs';
+import path from 'node:path';
+import express, { type Express, type RequestHandler } from 'express';
+import session from 'express-session';
+import helmet from 'helmet';
+import type { DataSource } from 'typeorm';
+import { createCsrf } from './auth/csrf.js';
+import { createPassport } from './auth/passport.js';
+import { signInLimits } from './auth/rate-limits.js';
+import { DatabaseSessionStore } from './auth/session-store.js';
+import type { Config } from './config.js';
+import { Store } from './db/store.js';
+import type { FakeMailServer } from './fakes/mail-server.js';
+import { ApiRouter, type RouteSpec } from './http/api-router.js';
+import { apiNotFound, errorHandler } from './http/error-handler.js';
+import { buildOpenApiDocument } from './http/openapi.js';
+import { Mailer } from './mail/mailer.js';
+import { adminRoutes } from './routes/admin.routes.js';
+import { authRoutes } from './routes/auth.routes.js';
+import { invitationRoutes } from './routes/invitations.routes.js';
+import { publicRoutes } from './routes/public.routes.js';
+import { userRoutes } from './routes/users.routes.js';
+import { vesselRoutes } from './routes/vessels.routes.js';
+import { AuditService } from './services/audit.service.js';
+import { AuthService } from './services/auth.service.js';
+import { HealthService } from './services/health.service.js';
+import { InvitationService } from './services/invitation.service.js';
+import { OutboxService } from './services/outbox.service.js';
+import { PasswordService } from './services/password.service.js';
+import { SettingsService } from './services/settings.service.js';
+import { UserService } from './services/user.service.js';
+import { VesselService } from './services/vessel.service.js';
+
+export interface AppDeps {
+  config: Config;
+  dataSource: DataSource;
+  fakeMail: FakeMailServer | null;
+}
+
+export interface ShipkeeperApp {
+  app: Express;
+  /** The API router and its declared routes (the authorization test enumerates both). */
+  api: ApiRouter;
+  routes: RouteSpec[];
+  sessions: DatabaseSessionStore;
+  close(): void;
+}
+
+const version = (JSON.parse(readFileSync(new URL('../package.json', import.meta.url), 'utf8')) as { version: string }).version;
+
+/** Ends a signed-in session that is older than the absolute timeout (OWASP ASVS 4.0.3, 3.3.2). */
+function absoluteTimeout(hours: number): RequestHandler {
+  return (req, _res, next) => {
+    const started = req.session?.signedInAt;
+    if (req.user && started && Date.now() - started > hours * 3_600_000) {
+      req.session.regenerate((err) => {
+        req.user = undefined;
+        next(err);
+      });
+      return;
+    }
+    next();
+  };
+}
+
+export function createApp({ config, dataSource, fakeMail }: AppDeps): ShipkeeperApp {
+  const store = new Store(dataSource);
+  const sessions = new DatabaseSessionStore(dataSource, config.sessionIdleMinutes * 60_000);
+  const mailer = new Mailer(config.mail, fakeMail?.port ?? null);
+
+  const auth = new AuthService(store, config);
+  const passport = createPassport(auth);
+  const csrf = createCsrf();
+  const settings = new SettingsService(store);
+  const vessels = new VesselService(store);
+
+  const api = new ApiRouter();
+  authRoutes(api, { auth, passport, passwords: new PasswordService(store, mailer, sessions, config), limits: signInLimits(config), generateCsrfToken: csrf.generateToken });
+  userRoutes(api, new UserService(store, sessions));
+  invitationRoutes(api, new InvitationService(store, mailer, config));
+  vesselRoutes(api, vessels);
+  adminRoutes(api, { audit: new AuditService(store), settings, outbox: new OutboxService(fakeMail) });
+  let openApi: object | null = null;
+  publicRoutes(api, {
+    health: new HealthService(dataSource, fakeMail, version),
+    vessels,
+    settings,
+    openApi: () => (openApi ??= buildOpenApiDocument(api.routes, version)),
+  });
+
+  const app = express();
+  app.disable('x-powered-by');
+  if (config.trustProxy) app.set('trust proxy', 1);
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          'default-src': ["'self'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'font-src': ["'self'", 'data:'],
+          'frame-src': ["'self'"],
+          'upgrade-insecure-requests': config.secureCookies ? [] : null,
+        },
+      },
+    }),
+  );
+  app.use(express.json({ limit: '1mb' }));
+  app.use(
+    session({
+      name: 'shipkeeper.sid',
+      secret: config.sessionSecret,
+      store: sessions,
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      cookie: { httpOnly: true, sameSite: 'lax', secure: config.secureCookies, maxAge: config.sessionIdleMinutes * 60_000 },
+    }),
+  );
+  app.use(passport.initialize());
+  app.use(passport.session());
+  app.use(absoluteTimeout(config.sessionAbsoluteHours));
+
+  app.use('/api/v1', (_req, res, next) => {
+    res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
+  app.use('/api/v1', csrf.csrfSynchronisedProtection, api.router);
+  app.use('/api', apiNotFound);
+
+  const indexHtml = path.join(config.clientDir, 'index.html');
+  if (existsSync(indexHtml)) {
+    app.use('/assets', express.static(path.join(config.clientDir, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }));
+    app.use(express.static(config.clientDir, { index: false }));
+    app.get('/*splat', (_req, res) => {
+      res.setHeader('Cache-Control', 'no-cache');
+      res.sendFile(indexHtml);
+    });
+  }
+  app.use(errorHandler);
+
+  return {
+    app,
+    api,
+    routes: api.routes,
+    sessions,
+    close: () => {
+      sessions.close();
+      mailer.close();
+    },
+  };
+}

@@ -1,0 +1,11 @@
+import { AuditEventEntity } from './audit-event.entity.js';
+import { InvitationEntity } from './invitation.entity.js';
+import { OrganisationSettingsEntity } from './organisation-settings.entity.js';
+import { PasswordResetEntity } from './password-reset.entity.js';
+import { SessionEntity } from './session.entity.js';
+import { UserEntity } from './user.entity.js';
+import { VesselEntity } from './vessel.entity.js';
+
+export { AuditEventEntity, InvitationEntity, OrganisationSettingsEntity, PasswordResetEntity, SessionEntity, UserEntity, VesselEntity };
+
+export const entities = [UserEntity, VesselEntity, OrganisationSettingsEntity, AuditEventEntity, SessionEntity, InvitationEntity, PasswordResetEntity];

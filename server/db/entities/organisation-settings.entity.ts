@@ -1,0 +1,30 @@
+import { Column, Entity, PrimaryColumn, UpdateDateColumn, VersionColumn } from 'typeorm';
+import type { UnitSystem } from '../../../shared/schemas/settings.js';
+
+/** The organisation's settings: a single row with id 1. */
+@Entity('organisation_settings')
+export class OrganisationSettingsEntity {
+  @PrimaryColumn({ type: 'integer' })
+  id: number;
+
+  @Column({ type: 'varchar', length: 160 })
+  organisationName: string;
+
+  @Column({ type: 'varchar', length: 2, default: 'US' })
+  country: string;
+
+  @Column({ type: 'varchar', length: 3, default: 'USD' })
+  currency: string;
+
+  @Column({ type: 'varchar', length: 20, default: 'us-customary' })
+  unitSystem: UnitSystem;
+
+  @Column({ type: 'varchar', length: 254, default: '' })
+  contactEmail: string;
+
+  @UpdateDateColumn({ type: 'datetime' })
+  updatedAt: Date;
+
+  @VersionColumn({ type: 'integer' })
+  version: number;
+}

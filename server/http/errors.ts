@@ -1,0 +1,55 @@
+import type { ErrorCode } from '../../shared/schemas/common.js';
+
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: ErrorCode,
+    message: string,
+    readonly fields?: Record<string, string>,
+    readonly retryAfterSeconds?: number,
+  ) {
+    super(message);
+  }
+}
+
+export class ValidationError extends ApiError {
+  constructor(fields: Record<string, string>, message = 'Some fields need attention.') {
+    super(400, 'validation', message, fields);
+  }
+}
+
+export class UnauthenticatedError extends ApiError {
+  constructor(message = 'Sign in to continue.') {
+    super(401, 'unauthenticated', message);
+  }
+}
+
+export class ForbiddenError extends ApiError {
+  constructor(message = 'Your role does not allow this.') {
+    super(403, 'forbidden', message);
+  }
+}
+
+export class NotFoundError extends ApiError {
+  constructor(what = 'The record') {
+    super(404, 'not_found', `${what} was not found.`);
+  }
+}
+
+export class ConflictError extends ApiError {
+  constructor(message: string, fields?: Record<string, string>) {
+    super(409, 'conflict', message, fields);
+  }
+}
+
+export class UnprocessableError extends ApiError {
+  constructor(message: string, fields?: Record<string, string>) {
+    super(422, 'unprocessable', message, fields);
+  }
+}
+
+export class RateLimitedError extends ApiError {
+  constructor(message: string, retryAfterSeconds: number) {
+    super(429, 'rate_limited', message, undefined, retryAfterSeconds);
+  }
+}

@@ -1,0 +1,39 @@
+import { loadConfig } from './config.js';
+import { createApp } from './app.js';
+import { openDatabase } from './db/data-source.js';
+import { seedDemo } from './db/seed/seed.js';
+import { DEMO_PASSWORD, DEMO_USERS } from './db/seed/demo-data.js';
+import { FakeMailServer } from './fakes/mail-server.js';
+
+const config = loadConfig();
+const dataSource = await openDatabase(config.databasePath);
+
+let fakeMail: FakeMailServer | null = null;
+if (!config.mail.host) {
+  fakeMail = new FakeMailServer();
+  try {
+    await fakeMail.start(config.fakeMailPort);
+  } catch {
+    await fakeMail.start(0); // the usual port is taken: any free one will do, the app knows which
+  }
+  console.log(`Local fake mail server on 127.0.0.1:${fakeMail.port} (no SMTP_HOST set); messages appear in the Outbox.`);
+}
+
+if (config.seedOnStart && (await seedDemo(dataSource, { bcryptCost: config.bcryptCost }))) {
+  console.log(`Demo data seeded. Sign in as ${DEMO_USERS.map((u) => u.email).join(', ')} with the password "${DEMO_PASSWORD}".`);
+}
+
+const shipkeeper = createApp({ config, dataSource, fakeMail });
+const server = shipkeeper.app.listen(config.port, config.host, () => {
+  console.log(`Shipkeeper is running at ${config.publicUrl}`);
+});
+
+async function shutdown() {
+  server.close();
+  shipkeeper.close();
+  await fakeMail?.stop();
+  await dataSource.destroy();
+  process.exit(0);
+}
+process.on('SIGINT', () => void shutdown());
+process.on('SIGTERM', () => void shutdown());

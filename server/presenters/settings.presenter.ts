@@ -1,0 +1,14 @@
+import type { OrganisationSettings } from '../../shared/schemas/settings.js';
+import type { OrganisationSettingsEntity } from '../db/entities/organisation-settings.entity.js';
+
+export function presentSettings(settings: OrganisationSettingsEntity): OrganisationSettings {
+  return {
+    organisationName: settings.organisationName,
+    country: settings.country,
+    currency: settings.currency,
+    unitSystem: settings.unitSystem,
+    contactEmail: settings.contactEmail,
+    updatedAt: settings.updatedAt.toISOString(),
+    version: settings.version,
+  };
+}

@@ -1,0 +1,44 @@
+import { z } from 'zod';
+import { healthResponse } from '../../shared/schemas/health.js';
+import { visitSite } from '../../shared/schemas/visit.js';
+import type { ApiRouter } from '../http/api-router.js';
+import { anyone } from '../http/access.js';
+import type { HealthService } from '../services/health.service.js';
+import type { SettingsService } from '../services/settings.service.js';
+import type { VesselService } from '../services/vessel.service.js';
+
+export function publicRoutes(api: ApiRouter, deps: { health: HealthService; vessels: VesselService; settings: SettingsService; openApi: () => object }) {
+  api.route({
+    method: 'get',
+    path: '/health',
+    tag: 'Service',
+    summary: "The database's state and which local fakes are running",
+    access: anyone,
+    response: healthResponse,
+    handler: async ({ res }) => {
+      const health = await deps.health.check();
+      if (health.status !== 'ok') res.status(503);
+      return health;
+    },
+  });
+
+  api.route({
+    method: 'get',
+    path: '/openapi.json',
+    tag: 'Service',
+    summary: 'This document',
+    access: anyone,
+    response: z.object({}).passthrough(),
+    handler: () => deps.openApi(),
+  });
+
+  api.route({
+    method: 'get',
+    path: '/visit/site',
+    tag: 'Visit',
+    summary: 'What the public site shows: the organisation and the vessels it keeps',
+    access: anyone,
+    response: visitSite,
+    handler: async () => ({ organisationName: (await deps.settings.get()).organisationName, vessels: await deps.vessels.listPublic() }),
+  });
+}

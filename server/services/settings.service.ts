@@ -1,0 +1,30 @@
+import type { UpdateSettingsBody } from '../../shared/schemas/settings.js';
+import type { Store } from '../db/store.js';
+import { ConflictError } from '../http/errors.js';
+import { presentSettings } from '../presenters/settings.presenter.js';
+import { changesBetween, recordAudit, type Actor } from './audit.service.js';
+
+export class SettingsService {
+  constructor(private readonly store: Store) {}
+
+  async get() {
+    return presentSettings(await this.store.repos.settings.get());
+  }
+
+  async update(body: UpdateSettingsBody, actor: Actor) {
+    const saved = await this.store.transaction(async (repos) => {
+      const settings = await repos.settings.get();
+      if (settings.version !== body.version) {
+        throw new ConflictError('Someone else changed the settings since you opened them. Reload to see their changes.', { version: `current version is ${settings.version}` });
+      }
+      const { version: _version, ...fields } = body;
+      const changes = changesBetween(settings, fields, ['organisationName', 'country', 'currency', 'unitSystem', 'contactEmail']);
+      if (!changes) return settings;
+      Object.assign(settings, fields);
+      const saved = await repos.settings.save(settings);
+      await recordAudit(repos, actor, { action: 'update', entityType: 'settings', entityId: 1, summary: 'Organisation settings changed', changes });
+      return saved;
+    });
+    return presentSettings(saved);
+  }
+}

@@ -1,0 +1,54 @@
+import { ROLES, type Role } from './roles.js';
+
+/**
+ * Who may do what, declared once per resource and action. The server enforces it on every
+ * route (see server/http/api-route.ts); the client reads the same table to hide what a user
+ * may not do.
+ */
+const STAFF: readonly Role[] = ROLES;
+const ADMIN: readonly Role[] = ['admin'];
+
+export const PERMISSIONS = {
+  vessel: { read: STAFF, create: ADMIN, update: ['admin', 'curator'], archive: ADMIN },
+  user: { read: ADMIN, update: ADMIN, deactivate: ADMIN, reactivate: ADMIN },
+  invitation: { read: ADMIN, create: ADMIN, resend: ADMIN, revoke: ADMIN },
+  auditEvent: { read: ADMIN },
+  settings: { read: STAFF, update: ADMIN },
+  outbox: { read: ADMIN },
+} as const satisfies Record<string, Record<string, readonly Role[]>>;
+
+export type Resource = keyof typeof PERMISSIONS;
+export type Action<R extends Resource = Resource> = keyof (typeof PERMISSIONS)[R] & string;
+
+/** A permission as carried by a route or a navigation entry. */
+export interface Permission<R extends Resource = Resource> {
+  resource: R;
+  action: Action<R>;
+}
+
+export function can<R extends Resource>(role: Role | null | undefined, resource: R, action: Action<R>): boolean {
+  if (!role) return false;
+  const allowed = (PERMISSIONS[resource] as Record<string, readonly Role[]>)[action];
+  return allowed ? allowed.includes(role) : false;
+}
+
+/** Every resource and the actions the role may take on it; sent to the client with the user. */
+export type PermissionMap = { [R in Resource]: Action<R>[] };
+
+export function permissionsFor(role: Role): PermissionMap {
+  const map = {} as Record<string, string[]>;
+  for (const [resource, actions] of Object.entries(PERMISSIONS)) {
+    map[resource] = Object.entries(actions as Record<string, readonly Role[]>)
+      .filter(([, roles]) => roles.includes(role))
+      .map(([action]) => action);
+  }
+  return map as PermissionMap;
+}
+
+export function allPermissions(): Permission[] {
+  const list: Permission[] = [];
+  for (const [resource, actions] of Object.entries(PERMISSIONS)) {
+    for (const action of Object.keys(actions)) list.push({ resource, action } as Permission);
+  }
+  return list;
+}

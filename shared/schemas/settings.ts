@@ -1,0 +1,32 @@
+import { z } from 'zod';
+import { text } from './common.js';
+
+export const UNIT_SYSTEMS = ['us-customary', 'metric'] as const;
+export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
+
+export const organisationSettings = z
+  .object({
+    organisationName: z.string(),
+    country: z.string(),
+    currency: z.string(),
+    unitSystem: z.enum(UNIT_SYSTEMS),
+    contactEmail: z.string(),
+    updatedAt: z.string(),
+    version: z.number().int(),
+  })
+  .meta({ id: 'OrganisationSettings' });
+export type OrganisationSettings = z.infer<typeof organisationSettings>;
+
+export const updateSettingsBody = z
+  .object({
+    organisationName: text(160, 'Organisation name'),
+    country: z.string().trim().toUpperCase().regex(/^[A-Z]{2}$/, 'Use the two-letter country code of ISO 3166-1 (e.g. US, GB).'),
+    currency: z.string().trim().toUpperCase().regex(/^[A-Z]{3}$/, 'Use the three-letter currency code of ISO 4217 (e.g. USD).'),
+    unitSystem: z.enum(UNIT_SYSTEMS, { error: 'Choose US customary or metric units.' }),
+    contactEmail: z.union([z.literal(''), z.email('Enter a valid e-mail address.')]),
+    version: z.number().int().min(1),
+  })
+  .partial()
+  .required({ version: true })
+  .meta({ id: 'UpdateSettingsBody' });
+export type UpdateSettingsBody = z.infer<typeof updateSettingsBody>;

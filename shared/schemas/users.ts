@@ -1,0 +1,45 @@
+import { z } from 'zod';
+import { ROLES } from '../roles.js';
+import { listQuery, pageOf, text } from './common.js';
+
+export const USER_STATUSES = ['active', 'deactivated'] as const;
+export type UserStatus = (typeof USER_STATUSES)[number];
+
+export const user = z
+  .object({
+    id: z.number().int(),
+    email: z.string(),
+    name: z.string(),
+    role: z.enum(ROLES),
+    status: z.enum(USER_STATUSES),
+    lastSignInAt: z.string().nullable(),
+    createdAt: z.string(),
+    updatedAt: z.string(),
+    version: z.number().int(),
+    abilities: z.object({ update: z.boolean(), deactivate: z.boolean(), reactivate: z.boolean() }),
+  })
+  .meta({ id: 'User' });
+export type User = z.infer<typeof user>;
+
+export const usersQuery = listQuery(['name', 'email', 'role', 'createdAt', 'lastSignInAt'], 'name').extend({
+  role: z.enum(ROLES).optional(),
+  status: z.enum(USER_STATUSES).optional(),
+  q: z.string().trim().max(100).optional(),
+});
+export type UsersQuery = z.infer<typeof usersQuery>;
+
+export const userPage = pageOf(user).meta({ id: 'UserPage' });
+
+export const updateUserBody = z
+  .object({
+    name: text(120, 'Name').optional(),
+    role: z.enum(ROLES, { error: 'Choose one of the roles.' }).optional(),
+    version: z.number().int().min(1),
+  })
+  .meta({ id: 'UpdateUserBody' });
+export type UpdateUserBody = z.infer<typeof updateUserBody>;
+
+export const deactivateUserBody = z
+  .object({ reason: text(500, 'Reason').optional() })
+  .meta({ id: 'DeactivateUserBody' });
+export type DeactivateUserBody = z.infer<typeof deactivateUserBody>;
