@@ -38,8 +38,9 @@ export class UserRepository {
     return this.repo.save(user);
   }
 
+  /** Records a sign-in without counting it as an edit (version and updatedAt stay). */
   touchSignIn(id: number, at: Date) {
-    return this.repo.update({ id }, { lastSignInAt: at });
+    return this.repo.update({ id }, { lastSignInAt: at, version: () => '"version"', updatedAt: () => '"updatedAt"' });
   }
 
   count() {

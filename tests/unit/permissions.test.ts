@@ -1,0 +1,42 @@
+import { describe, expect, it } from 'vitest';
+import { can, permissionsFor, type Action, type Resource } from '../../shared/permissions.js';
+import { ROLES, type Role } from '../../shared/roles.js';
+
+// Who may do what, as BRIEF.md assigns the roles; one row per resource and action.
+const MATRIX: Record<string, Record<Role, boolean>> = {
+  'vessel.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
+  'vessel.create': { admin: true, curator: false, conservator: false, docent: false, fundraiser: false },
+  'vessel.update': { admin: true, curator: true, conservator: false, docent: false, fundraiser: false },
+  'vessel.archive': { admin: true, curator: false, conservator: false, docent: false, fundraiser: false },
+  'user.read': { admin: true, curator: false, conservator: false, docent: false, fundraiser: false },
+  'user.update': { admin: true, curator: false, conservator: false, docent: false, fundraiser: false },
+  'user.deactivate': { admin: true, curator: false, conservator: false, docent: false, fundraiser: false },
+  'user.reactivate': { admin: true, curator: false, conservator: false, docent: false, fundraiser: false },
+  'invitation.read': { admin: true, curator: false, conservator: false, docent: false, fundraiser: false },
+  'invitation.create': { admin: true, curator: false, conservator: false, docent: false, fundraiser: false },
+  'invitation.resend': { admin: true, curator: false, conservator: false, docent: false, fundraiser: false },
+  'invitation.revoke': { admin: true, curator: false, conservator: false, docent: false, fundraiser: false },
+  'auditEvent.read': { admin: true, curator: false, conservator: false, docent: false, fundraiser: false },
+  'settings.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
+  'settings.update': { admin: true, curator: false, conservator: false, docent: false, fundraiser: false },
+  'outbox.read': { admin: true, curator: false, conservator: false, docent: false, fundraiser: false },
+};
+
+describe('permissions', () => {
+  for (const [key, expected] of Object.entries(MATRIX)) {
+    const [resource, action] = key.split('.') as [Resource, Action];
+    it.each(ROLES)(`${key} for %s`, (role) => {
+      expect(can(role, resource, action as never)).toBe(expected[role]);
+    });
+  }
+
+  it('the matrix above covers every declared permission', () => {
+    const declared = ROLES.flatMap((role) => Object.entries(permissionsFor(role)).flatMap(([r, actions]) => actions.map((a) => `${r}.${a}`)));
+    for (const key of declared) expect(Object.keys(MATRIX)).toContain(key);
+  });
+
+  it('nobody without a role may do anything', () => {
+    expect(can(null, 'vessel', 'read')).toBe(false);
+    expect(can(undefined, 'settings', 'read')).toBe(false);
+  });
+});
