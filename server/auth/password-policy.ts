@@ -31,7 +31,10 @@ export function passwordProblem(password: string, context: { email?: string; nam
   if (length < PASSWORD_MIN_LENGTH) return `Use at least ${PASSWORD_MIN_LENGTH} characters.`;
   if (length > PASSWORD_MAX_LENGTH) return `Use at most ${PASSWORD_MAX_LENGTH} characters.`;
   const lower = password.normalize('NFC').toLowerCase();
-  if (isCommon(lower) || isCommon(repeatedUnit(lower)) || repeatedUnit(lower).length <= 3) {
+  // "password password" and "p.a.s.s.w.o.r.d" are as weak as "password"
+  const squeezed = lower.replace(/[\s\p{P}\p{S}]+/gu, '');
+  const weak = (value: string) => isCommon(value) || isCommon(repeatedUnit(value)) || repeatedUnit(value).length <= 3;
+  if (weak(lower) || (squeezed.length > 0 && weak(squeezed))) {
     return 'This password is too common or too easy to guess. Try a few unrelated words.';
   }
   const emailName = context.email?.split('@')[0]?.toLowerCase();

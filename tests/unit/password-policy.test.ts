@@ -33,6 +33,8 @@ describe('password policy', () => {
     expect(passwordProblem('monkeymonkeymonkey')).toMatch(/too common/);
     expect(passwordProblem('zzzzzzzzzzzzzzzzzz')).toMatch(/too common/);
     expect(passwordProblem('abcabcabcabcabcabc')).toMatch(/too common/);
+    expect(passwordProblem('password password')).toMatch(/too common/);
+    expect(passwordProblem('Dragon-Dragon-Dragon')).toMatch(/too common/);
   });
 
   it('refuses a password built from the e-mail address', () => {

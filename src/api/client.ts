@@ -1,0 +1,96 @@
+import type { ErrorCode, ErrorEnvelope } from '@shared/schemas/common';
+
+/** An error answer of the API, in its envelope's terms. */
+export class ApiRequestError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: ErrorCode | 'network',
+    message: string,
+    readonly fields: Record<string, string> = {},
+    readonly retryAfterSeconds?: number,
+  ) {
+    super(message);
+  }
+}
+
+type Query = Record<string, string | number | boolean | null | undefined>;
+
+let csrfToken: string | null = null;
+let onUnauthenticated: (() => void) | null = null;
+
+/** Called when a request finds the session gone (signed out elsewhere, timed out, deactivated). */
+export function whenUnauthenticated(handler: () => void) {
+  onUnauthenticated = handler;
+}
+
+export function setCsrfToken(token: string | null) {
+  csrfToken = token;
+}
+
+async function fetchCsrfToken(): Promise<string> {
+  const { csrfToken: token } = await send<{ csrfToken: string }>('GET', '/auth/csrf');
+  csrfToken = token;
+  return token;
+}
+
+function url(path: string, query?: Query): string {
+  const params = new URLSearchParams();
+  for (const [key, value] of Object.entries(query ?? {})) {
+    if (value !== undefined && value !== null && value !== '') params.set(key, String(value));
+  }
+  const qs = params.toString();
+  return `/api/v1${path}${qs ? `?${qs}` : ''}`;
+}
+
+async function send<T>(method: string, path: string, options: { body?: unknown; query?: Query } = {}): Promise<T> {
+  const headers: Record<string, string> = { accept: 'application/json' };
+  if (options.body !== undefined) headers['content-type'] = 'application/json';
+  if (method !== 'GET' && csrfToken) headers['x-csrf-token'] = csrfToken;
+  let response: Response;
+  try {
+    response = await fetch(url(path, options.query), {
+      method,
+      headers,
+      credentials: 'same-origin',
+      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+    });
+  } catch {
+    throw new ApiRequestError(0, 'network', 'Shipkeeper cannot be reached. Check the connection and try again.');
+  }
+  if (response.status === 204) return undefined as T;
+  const data = (await response.json().catch(() => null)) as unknown;
+  if (!response.ok) {
+    const envelope = data as Partial<ErrorEnvelope> | null;
+    const error = envelope?.error;
+    throw new ApiRequestError(
+      response.status,
+      error?.code ?? 'internal',
+      error?.message ?? `The server answered ${response.status}.`,
+      error?.fields ?? {},
+      error?.retryAfterSeconds,
+    );
+  }
+  return data as T;
+}
+
+/** One request to the API: sends the CSRF token on changes and renews it once if it is stale. */
+export async function request<T>(method: 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE', path: string, options: { body?: unknown; query?: Query } = {}): Promise<T> {
+  if (method !== 'GET' && !csrfToken) await fetchCsrfToken();
+  try {
+    return await send<T>(method, path, options);
+  } catch (err) {
+    if (err instanceof ApiRequestError && err.code === 'csrf') {
+      await fetchCsrfToken();
+      return send<T>(method, path, options);
+    }
+    if (err instanceof ApiRequestError && err.status === 401 && !path.startsWith('/auth/')) onUnauthenticated?.();
+    throw err;
+  }
+}
+
+export const api = {
+  get: <T>(path: string, query?: Query) => request<T>('GET', path, { query }),
+  post: <T>(path: string, body?: unknown) => request<T>('POST', path, { body: body ?? {} }),
+  patch: <T>(path: string, body: unknown) => request<T>('PATCH', path, { body }),
+  delete: <T>(path: string) => request<T>('DELETE', path),
+};

@@ -1,0 +1,21 @@
+import type { Action, Resource } from '@shared/permissions';
+
+/** A resource with one of its own actions (a plain `Action` would allow only those every resource has). */
+export type NavPermission = { [R in Resource]: { resource: R; action: Action<R> } }[Resource];
+
+export interface NavEntry {
+  label: string;
+  icon: string;
+  route: string;
+  permission?: NavPermission;
+}
+
+/** The staff navigation: only parts that exist; each shows to the roles that may use it. */
+export const STAFF_NAV: NavEntry[] = [
+  { label: 'Overview', icon: 'pi pi-compass', route: 'staff-home' },
+  { label: 'Vessels', icon: 'pi pi-flag', route: 'vessels', permission: { resource: 'vessel', action: 'read' } },
+  { label: 'People', icon: 'pi pi-users', route: 'people', permission: { resource: 'user', action: 'read' } },
+  { label: 'Audit trail', icon: 'pi pi-history', route: 'audit-trail', permission: { resource: 'auditEvent', action: 'read' } },
+  { label: 'Outbox', icon: 'pi pi-envelope', route: 'outbox', permission: { resource: 'outbox', action: 'read' } },
+  { label: 'Settings', icon: 'pi pi-sliders-h', route: 'settings', permission: { resource: 'settings', action: 'update' } },
+];

@@ -1,0 +1,76 @@
+import type { Action, Resource } from '@shared/permissions';
+import { createRouter, createWebHistory } from 'vue-router';
+import { whenUnauthenticated } from '@/api/client';
+import { useSessionStore } from '@/stores/session';
+import SignInView from '@/views/SignInView.vue';
+
+/** A resource with one of its own actions (a plain `Action` would allow only those every resource has). */
+type ScreenPermission = { [R in Resource]: { resource: R; action: Action<R> } }[Resource];
+
+declare module 'vue-router' {
+  interface RouteMeta {
+    /** Signed-in staff only. */
+    staff?: boolean;
+    /** The permission the screen needs; the navigation hides what the user may not use. */
+    permission?: ScreenPermission;
+    title?: string;
+  }
+}
+
+export const router = createRouter({
+  history: createWebHistory(),
+  scrollBehavior: () => ({ top: 0 }),
+  routes: [
+    { path: '/', redirect: { name: 'visit-home' } },
+    { path: '/sign-in', name: 'sign-in', component: SignInView, meta: { title: 'Sign in' } },
+    { path: '/forgot-password', name: 'forgot-password', component: () => import('@/views/ForgotPasswordView.vue'), meta: { title: 'Forgot password' } },
+    { path: '/reset-password', name: 'reset-password', component: () => import('@/views/ResetPasswordView.vue'), meta: { title: 'Choose a new password' } },
+    { path: '/invitation', name: 'accept-invitation', component: () => import('@/views/AcceptInvitationView.vue'), meta: { title: 'Accept your invitation' } },
+    {
+      path: '/visit',
+      component: () => import('@/views/visit/VisitLayout.vue'),
+      children: [{ path: '', name: 'visit-home', component: () => import('@/views/visit/VisitHomeView.vue'), meta: { title: 'Visit' } }],
+    },
+    {
+      path: '/app',
+      component: () => import('@/views/staff/StaffLayout.vue'),
+      meta: { staff: true },
+      children: [
+        { path: '', name: 'staff-home', component: () => import('@/views/staff/OverviewView.vue'), meta: { title: 'Overview' } },
+        { path: 'vessels', name: 'vessels', component: () => import('@/views/staff/VesselsView.vue'), meta: { title: 'Vessels', permission: { resource: 'vessel', action: 'read' } } },
+        { path: 'people', name: 'people', component: () => import('@/views/staff/PeopleView.vue'), meta: { title: 'People', permission: { resource: 'user', action: 'read' } } },
+        { path: 'audit-trail', name: 'audit-trail', component: () => import('@/views/staff/AuditTrailView.vue'), meta: { title: 'Audit trail', permission: { resource: 'auditEvent', action: 'read' } } },
+        { path: 'outbox', name: 'outbox', component: () => import('@/views/staff/OutboxView.vue'), meta: { title: 'Outbox', permission: { resource: 'outbox', action: 'read' } } },
+        { path: 'settings', name: 'settings', component: () => import('@/views/staff/SettingsView.vue'), meta: { title: 'Settings', permission: { resource: 'settings', action: 'update' } } },
+        { path: 'account', name: 'account', component: () => import('@/views/staff/AccountView.vue'), meta: { title: 'Your account' } },
+        { path: 'forbidden', name: 'forbidden', component: () => import('@/views/ForbiddenView.vue'), meta: { title: 'Not for your role' } },
+      ],
+    },
+    { path: '/:pathMatch(.*)*', name: 'not-found', component: () => import('@/views/NotFoundView.vue'), meta: { title: 'Page not found' } },
+  ],
+});
+
+router.beforeEach(async (to) => {
+  const session = useSessionStore();
+  if (to.matched.some((r) => r.meta.staff)) {
+    const user = await session.load().catch(() => null);
+    if (!user) return { name: 'sign-in', query: { next: to.fullPath } };
+    const permission = to.meta.permission;
+    if (permission && !session.can(permission.resource, permission.action as never)) {
+      return { name: 'forbidden', query: { from: to.fullPath } };
+    }
+  }
+  if (to.name === 'sign-in' && (await session.load().catch(() => null))) return { name: 'staff-home' };
+  return true;
+});
+
+router.afterEach((to) => {
+  document.title = to.meta.title ? `${to.meta.title} · Shipkeeper` : 'Shipkeeper';
+});
+
+whenUnauthenticated(() => {
+  const session = useSessionStore();
+  session.forget();
+  const current = router.currentRoute.value;
+  if (current.matched.some((r) => r.meta.staff)) void router.push({ name: 'sign-in', query: { next: current.fullPath, expired: '1' } });
+});
