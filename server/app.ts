@@ -17,6 +17,7 @@ import { buildOpenApiDocument } from './http/openapi.js';
 import { Mailer } from './mail/mailer.js';
 import { adminRoutes } from './routes/admin.routes.js';
 import { authRoutes } from './routes/auth.routes.js';
+import { calcRoutes } from './routes/calc.routes.js';
 import { invitationRoutes } from './routes/invitations.routes.js';
 import { publicRoutes } from './routes/public.routes.js';
 import { userRoutes } from './routes/users.routes.js';
@@ -79,6 +80,7 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
   userRoutes(api, new UserService(store, sessions));
   invitationRoutes(api, new InvitationService(store, mailer, config));
   vesselRoutes(api, vessels);
+  calcRoutes(api);
   adminRoutes(api, { audit: new AuditService(store), settings, outbox: new OutboxService(fakeMail) });
   let openApi: object | null = null;
   publicRoutes(api, {

@@ -8,3 +8,4 @@ export * from './settings.js';
 export * from './outbox.js';
 export * from './health.js';
 export * from './visit.js';
+export * from './calc.js';
