@@ -6,6 +6,9 @@ import { DEMO_PASSWORD, DEMO_USERS } from './db/seed/demo-data.js';
 import { FakeMailServer } from './fakes/mail-server.js';
 
 const config = loadConfig();
+if (config.secureCookies && !config.trustProxy) {
+  console.warn('Warning: cookies are Secure (PUBLIC_URL is https) but TRUST_PROXY is off. Behind a TLS-terminating proxy, set TRUST_PROXY=true or nobody can sign in.');
+}
 const dataSource = await openDatabase(config.databasePath);
 
 let fakeMail: FakeMailServer | null = null;

@@ -10,10 +10,20 @@ export function hashPassword(password: string, cost: number): Promise<string> {
   return bcrypt.hash(prehash(password), cost);
 }
 
-/** Compares in constant work whether or not there is a hash, so timing does not tell who exists. */
-export async function verifyPassword(password: string, hash: string | null): Promise<boolean> {
-  const ok = await bcrypt.compare(prehash(password), hash ?? DUMMY_HASH);
-  return ok && hash !== null;
+const dummyHashes = new Map<number, string>();
+
+/** A hash of nothing at the given cost, compared against when there is no account. */
+function dummyHash(cost: number): string {
+  let hash = dummyHashes.get(cost);
+  if (!hash) dummyHashes.set(cost, (hash = bcrypt.hashSync('not a real password', cost)));
+  return hash;
 }
 
-const DUMMY_HASH = bcrypt.hashSync('not a real password', 10);
+/**
+ * Compares with the same work whether or not there is a hash (`cost` is the cost real hashes
+ * use), so timing does not tell who has an account.
+ */
+export async function verifyPassword(password: string, hash: string | null, cost: number): Promise<boolean> {
+  const ok = await bcrypt.compare(prehash(password), hash ?? dummyHash(cost));
+  return ok && hash !== null;
+}

@@ -1,5 +1,5 @@
 import type { Request, RequestHandler } from 'express';
-import { rateLimit, type Options } from 'express-rate-limit';
+import { ipKeyGenerator, rateLimit, type Options } from 'express-rate-limit';
 import type { Config } from '../config.js';
 import { RateLimitedError } from '../http/errors.js';
 
@@ -14,29 +14,58 @@ function limited(what: string): Options['handler'] {
 
 export interface SignInLimits {
   perAddress: RequestHandler;
+  perAccountFromAddress: RequestHandler;
   perAccount: RequestHandler;
   resetRequests: RequestHandler;
+  passwordChange: RequestHandler;
 }
 
-/** Sign-in limits per address (every attempt) and per account (failed attempts only). */
+function accountKey(req: Request): string {
+  return String(req.body?.email ?? '').trim().toLowerCase();
+}
+
+/**
+ * Failed sign-ins counted per address, per account from one address, and (more loosely) per
+ * account from anywhere, so that one stranger cannot lock an administrator out for long and one
+ * busy museum network does not lock itself out.
+ */
 export function signInLimits(config: Config): SignInLimits {
   const windowMs = config.loginWindowMinutes * 60_000;
   return {
     perAddress: rateLimit({
       windowMs,
       limit: config.loginLimitPerAddress,
+      skipSuccessfulRequests: true,
       standardHeaders: 'draft-8',
       legacyHeaders: false,
-      handler: limited('sign-in attempts from this network address'),
+      handler: limited('failed sign-in attempts from this network address'),
     }),
-    perAccount: rateLimit({
+    perAccountFromAddress: rateLimit({
       windowMs,
       limit: config.loginLimitPerAccount,
       skipSuccessfulRequests: true,
       standardHeaders: false,
       legacyHeaders: false,
-      keyGenerator: (req) => `account:${String(req.body?.email ?? '').trim().toLowerCase()}`,
+      keyGenerator: (req) => `account:${accountKey(req)}:${ipKeyGenerator(req.ip ?? '')}`,
       handler: limited('failed sign-in attempts for this account'),
+    }),
+    perAccount: rateLimit({
+      windowMs,
+      limit: config.loginLimitPerAccount * 4,
+      skipSuccessfulRequests: true,
+      standardHeaders: false,
+      legacyHeaders: false,
+      keyGenerator: (req) => `account:${accountKey(req)}`,
+      handler: limited('failed sign-in attempts for this account'),
+    }),
+    passwordChange: rateLimit({
+      windowMs,
+      limit: config.loginLimitPerAccount,
+      skipSuccessfulRequests: true,
+      standardHeaders: false,
+      legacyHeaders: false,
+      keyGenerator: (req) => `password-change:${req.user?.id ?? 'none'}`,
+      handler: limited('wrong current passwords'),
     }),
     resetRequests: rateLimit({
       windowMs,

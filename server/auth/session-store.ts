@@ -1,6 +1,7 @@
 import session from 'express-session';
 import { LessThan, type DataSource } from 'typeorm';
 import { SessionEntity } from '../db/entities/session.entity.js';
+import { writeLock } from '../db/write-lock.js';
 
 /**
  * express-session store on our own database. Written here because connect-typeorm's peer range
@@ -19,6 +20,10 @@ export class DatabaseSessionStore extends session.Store {
     return this.dataSource.getRepository(SessionEntity);
   }
 
+  private write<T>(work: () => Promise<T>): Promise<T> {
+    return writeLock(this.dataSource).run(work);
+  }
+
   private expiry(sess: session.SessionData): number {
     const expires = sess.cookie?.expires;
     return expires ? new Date(expires).getTime() : Date.now() + this.idleMs;
@@ -35,22 +40,19 @@ export class DatabaseSessionStore extends session.Store {
   }
 
   override set(sid: string, sess: session.SessionData, callback?: (err?: unknown) => void): void {
-    this.repo
-      .upsert({ sid, userId: sess.passport?.user ?? null, expiresAt: this.expiry(sess), data: JSON.stringify(sess) }, ['sid'])
+    this.write(() => this.repo.upsert({ sid, userId: sess.passport?.user ?? null, expiresAt: this.expiry(sess), data: JSON.stringify(sess) }, ['sid']))
       .then(() => callback?.())
       .catch((err) => callback?.(err));
   }
 
   override touch(sid: string, sess: session.SessionData, callback?: (err?: unknown) => void): void {
-    this.repo
-      .update({ sid }, { expiresAt: this.expiry(sess) })
+    this.write(() => this.repo.update({ sid }, { expiresAt: this.expiry(sess) }))
       .then(() => callback?.())
       .catch((err) => callback?.(err));
   }
 
   override destroy(sid: string, callback?: (err?: unknown) => void): void {
-    this.repo
-      .delete({ sid })
+    this.write(() => this.repo.delete({ sid }))
       .then(() => callback?.())
       .catch((err) => callback?.(err));
   }
@@ -59,12 +61,12 @@ export class DatabaseSessionStore extends session.Store {
   async destroyForUser(userId: number, exceptSid?: string): Promise<number> {
     const qb = this.repo.createQueryBuilder().delete().where('userId = :userId', { userId });
     if (exceptSid) qb.andWhere('sid != :sid', { sid: exceptSid });
-    const result = await qb.execute();
+    const result = await this.write(() => qb.execute());
     return result.affected ?? 0;
   }
 
   async prune(): Promise<void> {
-    await this.repo.delete({ expiresAt: LessThan(Date.now()) });
+    await this.write(() => this.repo.delete({ expiresAt: LessThan(Date.now()) }));
   }
 
   close(): void {

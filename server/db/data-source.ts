@@ -2,6 +2,7 @@ import 'reflect-metadata';
 import { DataSource } from 'typeorm';
 import { entities } from './entities/index.js';
 import { migrations } from './migrations/index.js';
+import { SettingsRepository } from './repositories/settings.repository.js';
 
 export function createDataSource(databasePath: string): DataSource {
   return new DataSource({
@@ -22,5 +23,6 @@ export async function openDatabase(databasePath: string): Promise<DataSource> {
   const dataSource = createDataSource(databasePath);
   await dataSource.initialize();
   await dataSource.runMigrations();
+  await new SettingsRepository(dataSource.manager).ensure();
   return dataSource;
 }

@@ -1,10 +1,14 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { AuditEventRepository } from './repositories/audit-event.repository.js';
+import { CompartmentRepository } from './repositories/compartment.repository.js';
+import { DeckRepository } from './repositories/deck.repository.js';
+import { HazardRepository } from './repositories/hazard.repository.js';
 import { InvitationRepository } from './repositories/invitation.repository.js';
 import { PasswordResetRepository } from './repositories/password-reset.repository.js';
 import { SettingsRepository } from './repositories/settings.repository.js';
 import { UserRepository } from './repositories/user.repository.js';
 import { VesselRepository } from './repositories/vessel.repository.js';
+import { writeLock } from './write-lock.js';
 
 export interface Repositories {
   users: UserRepository;
@@ -13,6 +17,9 @@ export interface Repositories {
   vessels: VesselRepository;
   auditEvents: AuditEventRepository;
   settings: SettingsRepository;
+  decks: DeckRepository;
+  compartments: CompartmentRepository;
+  hazards: HazardRepository;
 }
 
 function repositories(manager: EntityManager): Repositories {
@@ -23,6 +30,9 @@ function repositories(manager: EntityManager): Repositories {
     vessels: new VesselRepository(manager),
     auditEvents: new AuditEventRepository(manager),
     settings: new SettingsRepository(manager),
+    decks: new DeckRepository(manager),
+    compartments: new CompartmentRepository(manager),
+    hazards: new HazardRepository(manager),
   };
 }
 
@@ -34,7 +44,8 @@ export class Store {
     this.repos = repositories(dataSource.manager);
   }
 
+  /** Runs a change in one transaction, one at a time; nothing but database work may wait inside it. */
   transaction<T>(work: (repos: Repositories) => Promise<T>): Promise<T> {
-    return this.dataSource.transaction((manager) => work(repositories(manager)));
+    return writeLock(this.dataSource).run(() => this.dataSource.transaction((manager) => work(repositories(manager))));
   }
 }

@@ -51,7 +51,7 @@ export function authRoutes(api: ApiRouter, deps: AuthRouteDeps) {
     body: loginBody,
     response: loginResponse,
     errors: [429],
-    before: [deps.limits.perAddress, deps.limits.perAccount],
+    before: [deps.limits.perAddress, deps.limits.perAccountFromAddress, deps.limits.perAccount],
     handler: async ({ req, res }) => {
       const user = await authenticate(deps.passport, req, res);
       if (!user) throw new ApiError(401, 'unauthenticated', 'The e-mail address or the password is not correct.');
@@ -96,6 +96,8 @@ export function authRoutes(api: ApiRouter, deps: AuthRouteDeps) {
     access: signedIn,
     body: changePasswordBody,
     status: 204,
+    errors: [429],
+    before: [deps.limits.passwordChange],
     handler: async ({ req, body }) => {
       await deps.passwords.change(req.user!.id, body, req.sessionID, actorOf(req));
     },

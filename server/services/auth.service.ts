@@ -11,7 +11,7 @@ export class AuthService {
   /** The user if the e-mail and password match an active account; null otherwise (one answer for every failure). */
   async verifyCredentials(email: string, password: string): Promise<Express.User | null> {
     const user = await this.store.repos.users.findByEmail(email);
-    const ok = await verifyPassword(password, user?.status === 'active' ? user.passwordHash : null);
+    const ok = await verifyPassword(password, user?.status === 'active' ? user.passwordHash : null, this.config.bcryptCost);
     if (!ok || !user) return null;
     return { id: user.id, email: user.email, name: user.name, role: user.role };
   }

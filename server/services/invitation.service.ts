@@ -1,7 +1,7 @@
 import type { AcceptInvitationBody, CreateInvitationBody, InspectInvitationResponse, InvitationsQuery } from '../../shared/schemas/invitations.js';
 import { ROLE_LABELS } from '../../shared/roles.js';
 import type { Config } from '../config.js';
-import type { Store } from '../db/store.js';
+import type { Repositories, Store } from '../db/store.js';
 import type { InvitationEntity } from '../db/entities/invitation.entity.js';
 import { hashPassword } from '../auth/password-hash.js';
 import { passwordProblem } from '../auth/password-policy.js';
@@ -19,7 +19,7 @@ export class InvitationService {
     return new Date(Date.now() + this.config.invitationTtlHours * 3_600_000);
   }
 
-  private async send(invitation: InvitationEntity, token: string, invitedBy: string) {
+  private async send(invitation: Pick<InvitationEntity, 'email' | 'name' | 'role' | 'expiresAt'>, token: string, invitedBy: string) {
     const { organisationName } = await this.store.repos.settings.get();
     await this.mailer.send(
       invitationMail({
@@ -39,17 +39,29 @@ export class InvitationService {
     return { ...page, items: page.items.map((i) => presentInvitation(i, viewer)) };
   }
 
-  /** Creates the invitation and sends it; if the mail cannot be sent nothing is kept. */
+  private async refuseTaken(repos: Repositories, email: string) {
+    const existing = await repos.users.findByEmail(email);
+    if (existing?.status === 'deactivated') {
+      throw new ConflictError('This address belongs to a deactivated account. Reactivate it on the People tab instead of inviting again.', { email: 'Belongs to a deactivated account.' });
+    }
+    if (existing) throw new ConflictError('Someone with this e-mail address already has an account.', { email: 'Already has an account.' });
+    if (await repos.invitations.findOpenForEmail(email, new Date())) {
+      throw new ConflictError('This person already has an open invitation. Resend it instead.', { email: 'Already invited.' });
+    }
+  }
+
+  /**
+   * Sends the invitation, then records it. Mail goes out before anything is written, so a failed
+   * send keeps nothing, and no transaction waits on the mail server.
+   */
   async create(body: CreateInvitationBody, viewer: Express.User, actor: Actor) {
     const { token, hash } = newToken();
+    await this.refuseTaken(this.store.repos, body.email);
+    const expiresAt = this.expiry();
+    await this.send({ email: body.email, name: body.name, role: body.role, expiresAt }, token, viewer.name);
     const invitation = await this.store.transaction(async (repos) => {
-      if (await repos.users.findByEmail(body.email)) {
-        throw new ConflictError('Someone with this e-mail address already has an account.', { email: 'Already has an account.' });
-      }
-      if (await repos.invitations.findOpenForEmail(body.email, new Date())) {
-        throw new ConflictError('This person already has an open invitation. Resend it instead.', { email: 'Already invited.' });
-      }
-      const created = await repos.invitations.create({ ...body, tokenHash: hash, expiresAt: this.expiry(), invitedById: viewer.id });
+      await this.refuseTaken(repos, body.email);
+      const created = await repos.invitations.create({ ...body, tokenHash: hash, expiresAt, invitedById: viewer.id });
       await recordAudit(repos, actor, {
         action: 'invite',
         entityType: 'invitation',
@@ -57,29 +69,32 @@ export class InvitationService {
         summary: `${body.email} invited as ${ROLE_LABELS[body.role]}`,
         changes: { email: { from: null, to: body.email }, role: { from: null, to: body.role } },
       });
-      await this.send(created, token, viewer.name);
       return created;
     });
     const saved = await this.store.repos.invitations.findById(invitation.id);
     return presentInvitation(saved!, viewer);
   }
 
-  /** A new link (the old one stops working) and a new expiry. */
+  /** A new link (the old one stops working once the new one is sent) and a new expiry. */
   async resend(id: number, viewer: Express.User, actor: Actor) {
     const { token, hash } = newToken();
+    const current = await this.store.repos.invitations.findById(id);
+    if (!current) throw new NotFoundError('The invitation');
+    const refuse = (status: string) => {
+      if (status === 'accepted' || status === 'revoked') throw new UnprocessableError(`This invitation was ${status} and cannot be sent again.`);
+    };
+    refuse(invitationStatus(current));
+    const expiresAt = this.expiry();
+    await this.send({ ...current, expiresAt }, token, viewer.name);
     await this.store.transaction(async (repos) => {
       const invitation = await repos.invitations.findById(id);
       if (!invitation) throw new NotFoundError('The invitation');
-      const status = invitationStatus(invitation);
-      if (status === 'accepted' || status === 'revoked') {
-        throw new UnprocessableError(`This invitation was ${status} and cannot be sent again.`);
-      }
+      refuse(invitationStatus(invitation));
       invitation.tokenHash = hash;
-      invitation.expiresAt = this.expiry();
+      invitation.expiresAt = expiresAt;
       invitation.sentCount += 1;
       await repos.invitations.save(invitation);
       await recordAudit(repos, actor, { action: 'resend', entityType: 'invitation', entityId: id, summary: `Invitation to ${invitation.email} sent again` });
-      await this.send(invitation, token, viewer.name);
     });
     const saved = await this.store.repos.invitations.findById(id);
     return presentInvitation(saved!, viewer);

@@ -18,14 +18,18 @@ export class PasswordService {
     private readonly config: Config,
   ) {}
 
-  /** Sends a reset link to an active account; says nothing about whether the account exists. */
+  /**
+   * Sends a reset link to an active account. The answer neither says nor, by waiting on the mail
+   * server, shows whether the account exists: the mail goes out after the answer.
+   */
   async requestReset(email: string): Promise<void> {
     const user = await this.store.repos.users.findByEmail(email);
     if (!user || user.status !== 'active') return;
     const { token, hash } = newToken();
     const expiresAt = new Date(Date.now() + this.config.passwordResetTtlMinutes * 60_000);
-    await this.store.repos.passwordResets.create({ userId: user.id, tokenHash: hash, expiresAt });
-    await this.mailer.send(passwordResetMail({ to: user.email, name: user.name, url: `${this.config.publicUrl}/reset-password#${token}`, expiresAt }));
+    await this.store.transaction((repos) => repos.passwordResets.create({ userId: user.id, tokenHash: hash, expiresAt }));
+    const mail = passwordResetMail({ to: user.email, name: user.name, url: `${this.config.publicUrl}/reset-password#${token}`, expiresAt });
+    void this.mailer.send(mail).catch((err: unknown) => console.error(`Password reset mail to ${user.email} failed:`, err));
   }
 
   async completeReset(body: PasswordResetCompleteBody, ip: string | null): Promise<void> {
@@ -47,7 +51,7 @@ export class PasswordService {
 
   async change(userId: number, body: ChangePasswordBody, currentSid: string, actor: Actor): Promise<void> {
     const user = await this.store.repos.users.findById(userId);
-    if (!user || !(await verifyPassword(body.currentPassword, user.passwordHash))) {
+    if (!user || !(await verifyPassword(body.currentPassword, user.passwordHash, this.config.bcryptCost))) {
       throw new ValidationError({ currentPassword: 'This is not your current password.' });
     }
     const problem = passwordProblem(body.newPassword, { email: user.email });

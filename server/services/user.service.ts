@@ -55,6 +55,7 @@ export class UserService {
       }
       user.status = 'deactivated';
       const saved = await repos.users.save(user);
+      await repos.passwordResets.useAllFor(user.id, new Date());
       await recordAudit(repos, actor, {
         action: 'deactivate',
         entityType: 'user',

@@ -17,3 +17,8 @@ export async function pageOf<T extends ObjectLiteral>(qb: SelectQueryBuilder<T>,
   const [items, total] = await qb.getManyAndCount();
   return { items, total, page: request.page, pageSize: request.pageSize };
 }
+
+/** `%text%` for a case-insensitive LIKE with `\` as the escape, so % and _ match themselves. */
+export function likePattern(text: string): string {
+  return `%${text.toLowerCase().replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+}

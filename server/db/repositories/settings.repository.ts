@@ -16,12 +16,14 @@ export class SettingsRepository {
     return this.manager.getRepository(OrganisationSettingsEntity);
   }
 
-  /** The one settings row, made with defaults the first time it is asked for. */
-  async get(): Promise<OrganisationSettingsEntity> {
-    const row = await this.repo.findOneBy({ id: 1 });
-    if (row) return row;
-    await this.repo.createQueryBuilder().insert().values({ id: 1, ...DEFAULT_SETTINGS }).orIgnore().execute();
+  /** The one settings row (openDatabase makes it). */
+  get(): Promise<OrganisationSettingsEntity> {
     return this.repo.findOneByOrFail({ id: 1 });
+  }
+
+  /** Makes the settings row with defaults if there is none; run at start, before any request. */
+  async ensure(): Promise<void> {
+    await this.repo.createQueryBuilder().insert().values({ id: 1, ...DEFAULT_SETTINGS }).orIgnore().execute();
   }
 
   save(settings: OrganisationSettingsEntity) {

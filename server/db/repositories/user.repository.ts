@@ -1,7 +1,7 @@
 import type { EntityManager } from 'typeorm';
 import type { UsersQuery } from '../../../shared/schemas/users.js';
 import { UserEntity } from '../entities/user.entity.js';
-import { pageOf } from './paging.js';
+import { likePattern, pageOf } from './paging.js';
 
 export class UserRepository {
   constructor(private readonly manager: EntityManager) {}
@@ -22,7 +22,7 @@ export class UserRepository {
     const qb = this.repo.createQueryBuilder('user');
     if (query.role) qb.andWhere('user.role = :role', { role: query.role });
     if (query.status) qb.andWhere('user.status = :status', { status: query.status });
-    if (query.q) qb.andWhere('(LOWER(user.name) LIKE :q OR user.email LIKE :q)', { q: `%${query.q.toLowerCase()}%` });
+    if (query.q) qb.andWhere("(LOWER(user.name) LIKE :q ESCAPE '\\' OR user.email LIKE :q ESCAPE '\\')", { q: likePattern(query.q) });
     return pageOf(qb, query);
   }
 
