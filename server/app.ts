@@ -13,17 +13,24 @@ import { Store } from './db/store.js';
 import type { FakeMailServer } from './fakes/mail-server.js';
 import { ApiRouter, type RouteSpec } from './http/api-router.js';
 import { apiNotFound, errorHandler } from './http/error-handler.js';
+import { ApiError } from './http/errors.js';
 import { buildOpenApiDocument } from './http/openapi.js';
 import { Mailer } from './mail/mailer.js';
 import { adminRoutes } from './routes/admin.routes.js';
 import { authRoutes } from './routes/auth.routes.js';
 import { calcRoutes } from './routes/calc.routes.js';
+import { compartmentRoutes } from './routes/compartments.routes.js';
+import { deckRoutes } from './routes/decks.routes.js';
+import { hazardRoutes } from './routes/hazards.routes.js';
 import { invitationRoutes } from './routes/invitations.routes.js';
 import { publicRoutes } from './routes/public.routes.js';
 import { userRoutes } from './routes/users.routes.js';
 import { vesselRoutes } from './routes/vessels.routes.js';
 import { AuditService } from './services/audit.service.js';
 import { AuthService } from './services/auth.service.js';
+import { CompartmentService } from './services/compartment.service.js';
+import { DeckService } from './services/deck.service.js';
+import { HazardService } from './services/hazard.service.js';
 import { HealthService } from './services/health.service.js';
 import { InvitationService } from './services/invitation.service.js';
 import { OutboxService } from './services/outbox.service.js';
@@ -80,6 +87,9 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
   userRoutes(api, new UserService(store, sessions));
   invitationRoutes(api, new InvitationService(store, mailer, config));
   vesselRoutes(api, vessels);
+  deckRoutes(api, new DeckService(store));
+  compartmentRoutes(api, new CompartmentService(store));
+  hazardRoutes(api, new HazardService(store));
   calcRoutes(api);
   adminRoutes(api, { audit: new AuditService(store), settings, outbox: new OutboxService(fakeMail) });
   let openApi: object | null = null;
@@ -108,6 +118,13 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
     }),
   );
   app.use(express.json({ limit: '1mb' }));
+  app.use('/api/v1', (req, _res, next) => {
+    // req.is() is null without a body and false for a body of another type
+    if (req.is('application/json') === false) {
+      return next(new ApiError(415, 'unsupported_media_type', 'Send the request body as JSON (Content-Type: application/json).'));
+    }
+    next();
+  });
   app.use(
     session({
       name: 'shipkeeper.sid',

@@ -7,6 +7,8 @@ import { ROLES, type Role } from './roles.js';
  */
 const STAFF: readonly Role[] = ROLES;
 const ADMIN: readonly Role[] = ['admin'];
+const CURATOR: readonly Role[] = ['curator'];
+const CONSERVATOR: readonly Role[] = ['conservator'];
 
 export const PERMISSIONS = {
   vessel: { read: STAFF, create: ADMIN, update: ['admin', 'curator'], archive: ADMIN },
@@ -15,6 +17,9 @@ export const PERMISSIONS = {
   auditEvent: { read: ADMIN },
   settings: { read: STAFF, update: ADMIN },
   outbox: { read: ADMIN },
+  deck: { read: STAFF, create: CURATOR, update: CURATOR, delete: CURATOR },
+  compartment: { read: STAFF, create: CURATOR, update: CURATOR, delete: CURATOR },
+  hazard: { read: STAFF, create: CONSERVATOR, update: CONSERVATOR, delete: CONSERVATOR },
 } as const satisfies Record<string, Record<string, readonly Role[]>>;
 
 export type Resource = keyof typeof PERMISSIONS;

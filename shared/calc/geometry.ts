@@ -1,5 +1,5 @@
 /** A point on a deck plan in plan units (pixels of the full-resolution plan image). */
-export type Point = readonly [x: number, y: number];
+export type Point = [x: number, y: number];
 
 export function distance(a: Point, b: Point): number {
   return Math.hypot(b[0] - a[0], b[1] - a[1]);

@@ -9,3 +9,6 @@ export * from './outbox.js';
 export * from './health.js';
 export * from './visit.js';
 export * from './calc.js';
+export * from './decks.js';
+export * from './compartments.js';
+export * from './hazards.js';

@@ -20,6 +20,19 @@ const MATRIX: Record<string, Record<Role, boolean>> = {
   'settings.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
   'settings.update': { admin: true, curator: false, conservator: false, docent: false, fundraiser: false },
   'outbox.read': { admin: true, curator: false, conservator: false, docent: false, fundraiser: false },
+  // The ship map: curators edit it, conservators keep the hazard registers, every staff role reads.
+  'deck.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
+  'deck.create': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
+  'deck.update': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
+  'deck.delete': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
+  'compartment.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
+  'compartment.create': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
+  'compartment.update': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
+  'compartment.delete': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
+  'hazard.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
+  'hazard.create': { admin: false, curator: false, conservator: true, docent: false, fundraiser: false },
+  'hazard.update': { admin: false, curator: false, conservator: true, docent: false, fundraiser: false },
+  'hazard.delete': { admin: false, curator: false, conservator: true, docent: false, fundraiser: false },
 };
 
 describe('permissions', () => {

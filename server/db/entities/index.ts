@@ -1,4 +1,7 @@
 import { AuditEventEntity } from './audit-event.entity.js';
+import { CompartmentEntity } from './compartment.entity.js';
+import { DeckEntity } from './deck.entity.js';
+import { HazardEntity } from './hazard.entity.js';
 import { InvitationEntity } from './invitation.entity.js';
 import { OrganisationSettingsEntity } from './organisation-settings.entity.js';
 import { PasswordResetEntity } from './password-reset.entity.js';
@@ -6,6 +9,6 @@ import { SessionEntity } from './session.entity.js';
 import { UserEntity } from './user.entity.js';
 import { VesselEntity } from './vessel.entity.js';
 
-export { AuditEventEntity, InvitationEntity, OrganisationSettingsEntity, PasswordResetEntity, SessionEntity, UserEntity, VesselEntity };
+export { AuditEventEntity, CompartmentEntity, DeckEntity, HazardEntity, InvitationEntity, OrganisationSettingsEntity, PasswordResetEntity, SessionEntity, UserEntity, VesselEntity };
 
-export const entities = [UserEntity, VesselEntity, OrganisationSettingsEntity, AuditEventEntity, SessionEntity, InvitationEntity, PasswordResetEntity];
+export const entities = [UserEntity, VesselEntity, OrganisationSettingsEntity, AuditEventEntity, SessionEntity, InvitationEntity, PasswordResetEntity, DeckEntity, CompartmentEntity, HazardEntity];

@@ -1,0 +1,51 @@
+import type { EntityManager } from 'typeorm';
+import type { CompartmentsQuery } from '../../../shared/schemas/compartments.js';
+import { CompartmentEntity } from '../entities/compartment.entity.js';
+import { HazardEntity } from '../entities/hazard.entity.js';
+import { likePattern, pageOf } from './paging.js';
+
+export class CompartmentRepository {
+  constructor(private readonly manager: EntityManager) {}
+
+  private get repo() {
+    return this.manager.getRepository(CompartmentEntity);
+  }
+
+  findById(id: number) {
+    return this.repo.findOne({ where: { id }, relations: { deck: true } });
+  }
+
+  findByDesignation(vesselId: number, designationKey: string) {
+    return this.repo.findOneBy({ vesselId, designationKey });
+  }
+
+  countOnDeck(deckId: number) {
+    return this.repo.countBy({ deckId });
+  }
+
+  page(vesselId: number, query: CompartmentsQuery) {
+    const qb = this.repo.createQueryBuilder('compartment').leftJoinAndSelect('compartment.deck', 'deck').where('compartment.vesselId = :vesselId', { vesselId });
+    if (query.deckId) qb.andWhere('compartment.deckId = :deckId', { deckId: query.deckId });
+    if (query.accessStatus) qb.andWhere('compartment.accessStatus = :accessStatus', { accessStatus: query.accessStatus });
+    if (query.hazard) {
+      qb.andWhere((sub) => {
+        const exists = sub.subQuery().select('1').from(HazardEntity, 'h').where('h.compartmentId = compartment.id').andWhere('h.kind = :kind').getQuery();
+        return `EXISTS ${exists}`;
+      }).setParameter('kind', query.hazard);
+    }
+    if (query.q) qb.andWhere("(LOWER(compartment.name) LIKE :q ESCAPE '\\' OR LOWER(compartment.designation) LIKE :q ESCAPE '\\')", { q: likePattern(query.q) });
+    return pageOf(qb, query);
+  }
+
+  create(fields: Omit<CompartmentEntity, 'id' | 'vessel' | 'deck' | 'createdAt' | 'updatedAt' | 'version'>) {
+    return this.repo.save(this.repo.create(fields));
+  }
+
+  save(compartment: CompartmentEntity) {
+    return this.repo.save(compartment);
+  }
+
+  async remove(id: number) {
+    await this.repo.delete({ id });
+  }
+}

@@ -1,0 +1,74 @@
+import { z } from 'zod';
+import { text } from './common.js';
+
+const point = z.tuple([z.number(), z.number()]);
+const levelCode = z
+  .string()
+  .trim()
+  .regex(/^(0[1-9]|[1-9])\d?$/, 'Write the deck as designations do: 1 for the main deck, 2, 3, … below it, 01, 02, … above it.')
+  .nullable();
+
+export const deck = z
+  .object({
+    id: z.number().int(),
+    vesselId: z.number().int(),
+    name: z.string(),
+    position: z.number().int(),
+    levelCode: z.string().nullable(),
+    calibration: z
+      .object({
+        metresPerUnit: z.number(),
+        method: z.enum(['points', 'frames']),
+        a: point,
+        b: point,
+        realMetres: z.number(),
+        frameSpaces: z.number().int().optional(),
+        frameSpacingMetres: z.number().optional(),
+      })
+      .nullable(),
+    centerlineY: z.number().nullable(),
+    bowTo: z.enum(['right', 'left']),
+    compartmentCount: z.number().int(),
+    version: z.number().int(),
+    abilities: z.object({ update: z.boolean(), delete: z.boolean() }),
+  })
+  .meta({ id: 'Deck' });
+export type Deck = z.infer<typeof deck>;
+
+export const createDeckBody = z
+  .object({ name: text(80, 'Name'), levelCode: levelCode.default(null) })
+  .meta({ id: 'CreateDeckBody' });
+export type CreateDeckBody = z.input<typeof createDeckBody>;
+
+export const updateDeckBody = z
+  .object({
+    name: text(80, 'Name'),
+    levelCode,
+    position: z.number().int().min(0, 'Position starts at 0 (the top deck).'),
+    centerlineY: z.number().min(0, 'The centerline must lie on the plan.').nullable(),
+    bowTo: z.enum(['right', 'left'], { error: 'The bow points right or left on the plan.' }),
+    version: z.number().int().min(1),
+  })
+  .partial()
+  .required({ version: true })
+  .meta({ id: 'UpdateDeckBody' });
+export type UpdateDeckBody = z.infer<typeof updateDeckBody>;
+
+const positive = (label: string) => z.number({ error: `${label} must be a number.` }).positive(`${label} must be more than zero.`);
+
+export const calibrateDeckBody = z
+  .discriminatedUnion('method', [
+    z.object({ method: z.literal('points'), a: point, b: point, realMetres: positive('The real distance'), version: z.number().int().min(1) }),
+    z.object({
+      method: z.literal('frames'),
+      a: point,
+      b: point,
+      frameSpaces: z.number().int('Count whole frame spaces.').min(1, 'Count at least one frame space.'),
+      frameSpacingMetres: positive('The frame spacing'),
+      version: z.number().int().min(1),
+    }),
+  ])
+  .meta({ id: 'CalibrateDeckBody' });
+export type CalibrateDeckBody = z.infer<typeof calibrateDeckBody>;
+
+export const vesselParam = z.object({ vesselId: z.coerce.number().int().positive() });
