@@ -2,6 +2,7 @@ import type { DataSource } from 'typeorm';
 import { hashPassword } from '../../auth/password-hash.js';
 import { Store } from '../store.js';
 import { DEMO_ORGANISATION, DEMO_PASSWORD, DEMO_USERS, DEMO_VESSELS } from './demo-data.js';
+import { DEMO_COMPARTMENTS, DEMO_DECKS } from './demo-ship-map.js';
 
 export class SeedRefused extends Error {}
 
@@ -12,11 +13,35 @@ export async function seedDemo(dataSource: DataSource, options: { bcryptCost: nu
   if ((await store.repos.users.count()) > 0) return false;
   const passwordHash = await hashPassword(DEMO_PASSWORD, options.bcryptCost);
   await store.transaction(async (repos) => {
+    await repos.settings.ensure();
     const settings = await repos.settings.get();
     Object.assign(settings, DEMO_ORGANISATION);
     await repos.settings.save(settings);
-    for (const user of DEMO_USERS) await repos.users.create({ ...user, passwordHash });
-    for (const vessel of DEMO_VESSELS) await repos.vessels.create(vessel);
+    const users = [];
+    for (const user of DEMO_USERS) users.push(await repos.users.create({ ...user, passwordHash }));
+    const conservator = users.find((u) => u.role === 'conservator')!;
+    const vessels = [];
+    for (const vessel of DEMO_VESSELS) vessels.push(await repos.vessels.create(vessel));
+    const flagship = vessels[0]!;
+    const decks = new Map<string, number>();
+    for (const [position, deck] of DEMO_DECKS.entries()) decks.set(deck.name, (await repos.decks.create({ vesselId: flagship.id, ...deck, position })).id);
+    for (const c of DEMO_COMPARTMENTS) {
+      const compartment = await repos.compartments.create({
+        vesselId: flagship.id,
+        deckId: decks.get(c.deck)!,
+        designation: c.designation,
+        designationKey: c.designation.toUpperCase(),
+        name: c.name,
+        description: c.description,
+        accessStatus: c.accessStatus,
+        virtualVisit: c.virtualVisit ?? false,
+        outline: null,
+      });
+      for (const h of c.hazards ?? []) {
+        const checked = h.checkedDaysAgo === undefined ? null : new Date(Date.now() - h.checkedDaysAgo * 86_400_000).toISOString().slice(0, 10);
+        await repos.hazards.create({ compartmentId: compartment.id, kind: h.kind, notes: h.notes, lastVerifiedOn: checked, verifiedById: checked ? conservator.id : null });
+      }
+    }
   });
   return true;
 }
