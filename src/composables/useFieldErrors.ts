@@ -24,6 +24,12 @@ export function useFieldErrors() {
     return null;
   }
 
+  /** An error the schema cannot find, such as a confirmation that differs, reported as `check` does. */
+  function add(field: string, text: string) {
+    fields.value[field] = text;
+    message.value = 'Some fields need attention.';
+  }
+
   function take(err: unknown) {
     if (err instanceof ApiRequestError) {
       fields.value = { ...err.fields };
@@ -33,5 +39,5 @@ export function useFieldErrors() {
     }
   }
 
-  return { fields, message, clear, check, take };
+  return { fields, message, clear, check, add, take };
 }

@@ -10,6 +10,8 @@ export function useLazyTable(defaultSort: string, pageSize = 25) {
   const first = computed(() => (page.value - 1) * rows.value);
   const sortField = computed(() => sort.value.replace(/^-/, ''));
   const sortOrder = computed(() => (sort.value.startsWith('-') ? -1 : 1));
+  /** The paging part of the list request. */
+  const params = computed(() => ({ page: page.value, pageSize: rows.value, sort: sort.value }));
 
   function onPage(event: DataTablePageEvent) {
     page.value = event.page + 1;
@@ -26,5 +28,7 @@ export function useLazyTable(defaultSort: string, pageSize = 25) {
     page.value = 1;
   }
 
-  return { page, rows, sort, first, sortField, sortOrder, onPage, onSort, firstPage };
+  return { page, rows, sort, first, sortField, sortOrder, params, onPage, onSort, firstPage };
 }
+
+export type LazyTable = ReturnType<typeof useLazyTable>;
