@@ -22,6 +22,7 @@ import { calcRoutes } from './routes/calc.routes.js';
 import { compartmentRoutes } from './routes/compartments.routes.js';
 import { deckRoutes } from './routes/decks.routes.js';
 import { hazardRoutes } from './routes/hazards.routes.js';
+import { planRoutes } from './routes/plans.routes.js';
 import { invitationRoutes } from './routes/invitations.routes.js';
 import { publicRoutes } from './routes/public.routes.js';
 import { userRoutes } from './routes/users.routes.js';
@@ -31,6 +32,8 @@ import { AuthService } from './services/auth.service.js';
 import { CompartmentService } from './services/compartment.service.js';
 import { DeckService } from './services/deck.service.js';
 import { HazardService } from './services/hazard.service.js';
+import { PlanService } from './services/plan.service.js';
+import { FileStore } from './storage/file-store.js';
 import { HealthService } from './services/health.service.js';
 import { InvitationService } from './services/invitation.service.js';
 import { OutboxService } from './services/outbox.service.js';
@@ -49,6 +52,8 @@ export interface ShipkeeperApp {
   app: Express;
   /** The API router and its declared routes (the authorization test enumerates both). */
   api: ApiRouter;
+  plans: PlanService;
+  files: FileStore;
   routes: RouteSpec[];
   sessions: DatabaseSessionStore;
   close(): void;
@@ -81,6 +86,8 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
   const csrf = createCsrf();
   const settings = new SettingsService(store);
   const vessels = new VesselService(store);
+  const files = new FileStore(config.uploadsDir);
+  const plans = new PlanService(store, files, config);
 
   const api = new ApiRouter();
   authRoutes(api, { auth, passport, passwords: new PasswordService(store, mailer, sessions, config), limits: signInLimits(config), generateCsrfToken: csrf.generateToken });
@@ -90,6 +97,7 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
   deckRoutes(api, new DeckService(store));
   compartmentRoutes(api, new CompartmentService(store));
   hazardRoutes(api, new HazardService(store));
+  planRoutes(api, plans, { incomingDir: files.incoming, maxBytes: config.planMaxBytes });
   calcRoutes(api);
   adminRoutes(api, { audit: new AuditService(store), settings, outbox: new OutboxService(fakeMail) });
   let openApi: object | null = null;
@@ -120,7 +128,7 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
   app.use(express.json({ limit: '1mb' }));
   app.use('/api/v1', (req, _res, next) => {
     // req.is() is null without a body and false for a body of another type
-    if (req.is('application/json') === false) {
+    if (req.is('application/json') === false && !req.is('multipart/form-data')) {
       return next(new ApiError(415, 'unsupported_media_type', 'Send the request body as JSON (Content-Type: application/json).'));
     }
     next();
@@ -161,6 +169,8 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
   return {
     app,
     api,
+    plans,
+    files,
     routes: api.routes,
     sessions,
     close: () => {

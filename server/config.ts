@@ -36,6 +36,9 @@ export interface Config {
   fakeMailPort: number;
   clientDir: string;
   seedOnStart: boolean;
+  /** Largest deck plan accepted, in bytes and in pixels a side. */
+  planMaxBytes: number;
+  planMaxSide: number;
 }
 
 function int(value: string | undefined, fallback: number, name: string): number {
@@ -98,6 +101,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
     fakeMailPort: int(env.FAKE_SMTP_PORT, 2525, 'FAKE_SMTP_PORT'),
     clientDir: path.resolve(env.CLIENT_DIR ?? './dist'),
     seedOnStart: bool(env.SEED_ON_START, nodeEnv !== 'production'),
+    planMaxBytes: int(env.PLAN_MAX_MB, 300, 'PLAN_MAX_MB') * 1024 * 1024,
+    planMaxSide: int(env.PLAN_MAX_SIDE, 40_000, 'PLAN_MAX_SIDE'),
   };
   return { ...config, ...overrides };
 }

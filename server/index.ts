@@ -27,6 +27,8 @@ if (config.seedOnStart && (await seedDemo(dataSource, { bcryptCost: config.bcryp
 }
 
 const shipkeeper = createApp({ config, dataSource, fakeMail });
+await shipkeeper.files.ensure();
+await shipkeeper.plans.recoverInterrupted();
 const server = shipkeeper.app.listen(config.port, config.host, () => {
   console.log(`Shipkeeper is running at ${config.publicUrl}`);
 });

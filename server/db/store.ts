@@ -5,6 +5,7 @@ import { DeckRepository } from './repositories/deck.repository.js';
 import { HazardRepository } from './repositories/hazard.repository.js';
 import { InvitationRepository } from './repositories/invitation.repository.js';
 import { PasswordResetRepository } from './repositories/password-reset.repository.js';
+import { PlanRepository } from './repositories/plan.repository.js';
 import { SettingsRepository } from './repositories/settings.repository.js';
 import { UserRepository } from './repositories/user.repository.js';
 import { VesselRepository } from './repositories/vessel.repository.js';
@@ -20,6 +21,7 @@ export interface Repositories {
   decks: DeckRepository;
   compartments: CompartmentRepository;
   hazards: HazardRepository;
+  plans: PlanRepository;
 }
 
 function repositories(manager: EntityManager): Repositories {
@@ -33,6 +35,7 @@ function repositories(manager: EntityManager): Repositories {
     decks: new DeckRepository(manager),
     compartments: new CompartmentRepository(manager),
     hazards: new HazardRepository(manager),
+    plans: new PlanRepository(manager),
   };
 }
 

@@ -13,12 +13,17 @@ export const apiNotFound: RequestHandler = (req, res) => {
 
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   if (res.headersSent) return;
+  if (req.socket?.destroyed) return; // the client went away mid-request (an interrupted upload): nobody to answer
   if (err instanceof ApiError) {
     const { code, message, fields, retryAfterSeconds } = err;
     return send(res, err.status, { code, message, ...(fields && { fields }), ...(retryAfterSeconds !== undefined && { retryAfterSeconds }) });
   }
   if (err?.code === 'EBADCSRFTOKEN') {
     return send(res, 403, { code: 'csrf', message: 'The security token of this page is missing or out of date. Reload the page and try again.' });
+  }
+  if (err?.name === 'MulterError') {
+    if (err.code === 'LIMIT_FILE_SIZE') return send(res, 413, { code: 'payload_too_large', message: 'The file is larger than this server accepts.', fields: { file: 'Too large.' } });
+    return send(res, 400, { code: 'bad_request', message: `The upload could not be read: ${String(err.message).toLowerCase()}.`, ...(err.field && { fields: { [err.field]: 'Unexpected.' } }) });
   }
   if (err?.type === 'entity.parse.failed') {
     return send(res, 400, { code: 'bad_request', message: 'The request body is not valid JSON.' });

@@ -12,3 +12,4 @@ export * from './calc.js';
 export * from './decks.js';
 export * from './compartments.js';
 export * from './hazards.js';
+export * from './plans.js';

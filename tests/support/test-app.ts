@@ -20,6 +20,7 @@ export async function createTestApp(overrides: Partial<Config> = {}, options: { 
   const fakeMail = new FakeMailServer();
   if (options.mail !== false) await fakeMail.start(0);
   const shipkeeper = createApp({ config, dataSource, fakeMail });
+  await shipkeeper.files.ensure();
   return {
     ...shipkeeper,
     config,
@@ -28,6 +29,7 @@ export async function createTestApp(overrides: Partial<Config> = {}, options: { 
     fakeMail,
     store: new Store(dataSource),
     async close(keepFiles = false) {
+      await shipkeeper.plans.idle();
       shipkeeper.close();
       await fakeMail.stop();
       await dataSource.destroy();

@@ -5,10 +5,11 @@ import { HazardEntity } from './hazard.entity.js';
 import { InvitationEntity } from './invitation.entity.js';
 import { OrganisationSettingsEntity } from './organisation-settings.entity.js';
 import { PasswordResetEntity } from './password-reset.entity.js';
+import { PlanEntity } from './plan.entity.js';
 import { SessionEntity } from './session.entity.js';
 import { UserEntity } from './user.entity.js';
 import { VesselEntity } from './vessel.entity.js';
 
-export { AuditEventEntity, CompartmentEntity, DeckEntity, HazardEntity, InvitationEntity, OrganisationSettingsEntity, PasswordResetEntity, SessionEntity, UserEntity, VesselEntity };
+export { AuditEventEntity, CompartmentEntity, DeckEntity, HazardEntity, InvitationEntity, OrganisationSettingsEntity, PasswordResetEntity, PlanEntity, SessionEntity, UserEntity, VesselEntity };
 
-export const entities = [UserEntity, VesselEntity, OrganisationSettingsEntity, AuditEventEntity, SessionEntity, InvitationEntity, PasswordResetEntity, DeckEntity, CompartmentEntity, HazardEntity];
+export const entities = [UserEntity, VesselEntity, OrganisationSettingsEntity, AuditEventEntity, SessionEntity, InvitationEntity, PasswordResetEntity, DeckEntity, CompartmentEntity, HazardEntity, PlanEntity];

@@ -1,5 +1,6 @@
 import { Foundation1796204951114 } from './1796204951114-Foundation.js';
 import { ShipMap1796208163044 } from './1796208163044-ShipMap.js';
+import { DeckPlans1796208850383 } from './1796208850383-DeckPlans.js';
 
 /** Every migration, oldest first; run at start by openDatabase(). */
-export const migrations = [Foundation1796204951114, ShipMap1796208163044];
+export const migrations = [Foundation1796204951114, ShipMap1796208163044, DeckPlans1796208850383];

@@ -19,6 +19,11 @@ export class CompartmentRepository {
     return this.repo.findOneBy({ vesselId, designationKey });
   }
 
+  /** Compartments of a deck that have been drawn on its plan. */
+  outlinesOnDeck(deckId: number) {
+    return this.repo.createQueryBuilder('c').where('c.deckId = :deckId', { deckId }).andWhere('c.outline IS NOT NULL').getMany();
+  }
+
   countOnDeck(deckId: number) {
     return this.repo.countBy({ deckId });
   }
