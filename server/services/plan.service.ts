@@ -4,7 +4,7 @@ import { unlink } from 'node:fs/promises';
 import path from 'node:path';
 import { fileTypeFromFile } from 'file-type';
 import sharp from 'sharp';
-import { PLAN_FORMATS, PLAN_TILE_SIZE, planMaxZoom, planTileCount, type PlanFit } from '../../shared/schemas/plans.js';
+import { PLAN_FORMATS, planMaxZoom, planTileCount, type PlanFit } from '../../shared/schemas/plans.js';
 import type { Point } from '../../shared/calc/geometry.js';
 import type { Config } from '../config.js';
 import type { DeckEntity } from '../db/entities/deck.entity.js';
@@ -14,6 +14,7 @@ import { ApiError, NotFoundError, UnprocessableError, ValidationError } from '..
 import { planVersion, presentPlan } from '../presenters/plan.presenter.js';
 import type { FileStore } from '../storage/file-store.js';
 import { recordAudit, type Actor } from './audit.service.js';
+import { buildPyramid } from './plan-tiler.js';
 
 const EXTENSIONS: Record<string, string> = { 'image/png': 'png', 'image/jpeg': 'jpg', 'image/webp': 'webp', 'image/tiff': 'tif' };
 const SAME_ASPECT = 0.01;
@@ -127,7 +128,7 @@ export class PlanService {
     let storageKey: string | null = null;
     try {
       if (this.cancelled.has(planId)) return;
-      await sharp(original, { limitInputPixels: false }).png({ compressionLevel: 6 }).tile({ size: PLAN_TILE_SIZE, layout: 'google', skipBlanks: -1 }).toFile(`${pyramid}.dz`);
+      await buildPyramid(original, pyramid);
       clearInterval(progress);
       if (this.cancelled.has(planId)) return;
       const plan = (await this.store.repos.plans.findById(planId))!;
