@@ -1,5 +1,7 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { clearData, seedDemo, SeedRefused } from '../../server/db/seed/seed.js';
+import { seedDemoPlans } from '../../server/db/seed/seed-plans.js';
+import { signedInAs } from '../support/http.js';
 import { DEMO_COMPARTMENTS } from '../../server/db/seed/demo-ship-map.js';
 import { DEMO_PASSWORD, DEMO_USERS } from '../../server/db/seed/demo-data.js';
 import { Client } from '../support/http.js';
@@ -33,6 +35,23 @@ describe('demo seed', () => {
     expect(await seedDemo(ctx.dataSource, { bcryptCost: 4 })).toBe(true);
     const [{ n }] = await ctx.dataSource.query('SELECT COUNT(*) AS n FROM users');
     expect(n).toBe(DEMO_USERS.length);
+  });
+
+  it('draws, tiles and calibrates a plan for every deck of the demo ship and maps its compartments', async () => {
+    ctx = await createTestApp({}, { mail: false });
+    await seedDemo(ctx.dataSource, { bcryptCost: 4 });
+    await seedDemoPlans(ctx.dataSource, ctx.config);
+    const { client } = await signedInAs(ctx.app, ctx.store, 'docent');
+    const [vessel] = (await client.get('/api/v1/vessels?sort=createdAt')).body.items;
+    const decks = (await client.get(`/api/v1/vessels/${vessel.id}/decks`)).body;
+    expect(decks).toHaveLength(4);
+    for (const deck of decks) expect((await client.get(`/api/v1/decks/${deck.id}/plan`)).body.current).toMatchObject({ status: 'ready', width: 3200, height: 1000 });
+    const rooms = (await client.get(`/api/v1/vessels/${vessel.id}/compartments?pageSize=100`)).body.items;
+    expect(rooms).toHaveLength(DEMO_COMPARTMENTS.length);
+    for (const room of rooms) expect(room.designationWarnings, room.designation).toEqual([]);
+    // Boiler room, frames 40 to 60 at 24 in, 24 ft wide: 40 ft × 24 ft = 960 ft² (by hand).
+    const boiler = rooms.find((r: { designation: string }) => r.designation === '2-40-0-E');
+    expect(boiler.floorArea.squareFeet).toBeCloseTo(960, 6);
   });
 
   it('refuses to run when NODE_ENV=production', async () => {

@@ -2,12 +2,16 @@
 import { loadConfig } from '../../config.js';
 import { openDatabase } from '../data-source.js';
 import { clearData, seedDemo } from './seed.js';
+import { seedDemoPlans } from './seed-plans.js';
+import { FileStore } from '../../storage/file-store.js';
 
 const config = loadConfig();
 try {
   const dataSource = await openDatabase(config.databasePath);
   await clearData(dataSource);
+  await new FileStore(config.uploadsDir).remove('plans');
   await seedDemo(dataSource, { bcryptCost: config.bcryptCost });
+  await seedDemoPlans(dataSource, config);
   await dataSource.destroy();
   console.log(`Demo data written to ${config.databasePath}.`);
 } catch (err) {
