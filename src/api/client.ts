@@ -94,3 +94,31 @@ export const api = {
   patch: <T>(path: string, body: unknown) => request<T>('PATCH', path, { body }),
   delete: <T>(path: string) => request<T>('DELETE', path),
 };
+
+/** Sends one file as multipart `file`, reporting the share sent (0–1) as it goes. */
+export async function upload<T>(path: string, file: File, onProgress?: (fraction: number) => void): Promise<T> {
+  if (!csrfToken) await fetchCsrfToken();
+  return new Promise<T>((resolve, reject) => {
+    const xhr = new XMLHttpRequest();
+    xhr.open('POST', url(path));
+    xhr.setRequestHeader('accept', 'application/json');
+    if (csrfToken) xhr.setRequestHeader('x-csrf-token', csrfToken);
+    xhr.upload.onprogress = (event) => event.lengthComputable && onProgress?.(event.loaded / event.total);
+    xhr.onerror = () => reject(new ApiRequestError(0, 'network', 'Shipkeeper cannot be reached. Check the connection and try again.'));
+    xhr.onload = () => {
+      let data: unknown = null;
+      try {
+        data = JSON.parse(xhr.responseText);
+      } catch {
+        data = null;
+      }
+      if (xhr.status >= 200 && xhr.status < 300) return resolve(data as T);
+      const error = (data as Partial<ErrorEnvelope> | null)?.error;
+      if (xhr.status === 401) onUnauthenticated?.();
+      reject(new ApiRequestError(xhr.status, error?.code ?? 'internal', error?.message ?? `The server answered ${xhr.status}.`, error?.fields ?? {}));
+    };
+    const form = new FormData();
+    form.append('file', file);
+    xhr.send(form);
+  });
+}

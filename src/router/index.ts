@@ -38,6 +38,9 @@ export const router = createRouter({
       children: [
         { path: '', name: 'staff-home', component: () => import('@/views/staff/OverviewView.vue'), meta: { title: 'Overview' } },
         { path: 'vessels', name: 'vessels', component: () => import('@/views/staff/VesselsView.vue'), meta: { title: 'Vessels', permission: { resource: 'vessel', action: 'read' } } },
+        { path: 'ship', name: 'ship-map', component: () => import('@/views/staff/ShipMapView.vue'), meta: { title: 'Ship map', permission: { resource: 'deck', action: 'read' } } },
+        { path: 'compartments', name: 'compartments', component: () => import('@/views/staff/CompartmentsView.vue'), meta: { title: 'Compartments', permission: { resource: 'compartment', action: 'read' } } },
+        { path: 'compartments/:id', name: 'compartment', component: () => import('@/views/staff/CompartmentView.vue'), meta: { title: 'Compartment', permission: { resource: 'compartment', action: 'read' } } },
         { path: 'people', name: 'people', component: () => import('@/views/staff/PeopleView.vue'), meta: { title: 'People', permission: { resource: 'user', action: 'read' } } },
         { path: 'audit-trail', name: 'audit-trail', component: () => import('@/views/staff/AuditTrailView.vue'), meta: { title: 'Audit trail', permission: { resource: 'auditEvent', action: 'read' } } },
         { path: 'outbox', name: 'outbox', component: () => import('@/views/staff/OutboxView.vue'), meta: { title: 'Outbox', permission: { resource: 'outbox', action: 'read' } } },
