@@ -133,6 +133,8 @@ export class PlanService {
       if (this.cancelled.has(planId)) return;
       const plan = (await this.store.repos.plans.findById(planId))!;
       storageKey = `plans/deck-${plan.deckId}/${planVersion(plan)}`;
+      // The key holds this new row's id, so anything already there is an orphan (e.g. the database was reset but not the uploads)
+      await this.files.remove(storageKey);
       await this.files.moveIn(work, storageKey);
       const key = storageKey;
       const outcome = await this.store.transaction(async (repos) => {

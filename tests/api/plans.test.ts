@@ -58,6 +58,22 @@ describe('plan upload and tiles', () => {
     expect(filesUnder(ctx.files.incoming)).toEqual([]);
   });
 
+  it('replaces orphaned files left at the new plan\'s place (a database reset without the uploads)', async () => {
+    await setUp();
+    const png = await planPng(600, 400);
+    const { createHash } = await import('node:crypto');
+    const orphan = `plans/deck-${deck.id}/1-${createHash('sha256').update(png).digest('hex').slice(0, 12)}/pyramid/0/0`;
+    const { mkdirSync, writeFileSync } = await import('node:fs');
+    mkdirSync(ctx.files.path(orphan), { recursive: true });
+    writeFileSync(ctx.files.path(`${orphan}/0.png`), 'stale');
+    await upload(png);
+    const state = await planState();
+    expect(state.current).toMatchObject({ id: 1, status: 'ready' });
+    const tile = await curator.get(state.current.tileUrl.replace('{z}', '0').replace('{y}', '0').replace('{x}', '0'));
+    expect(tile.status).toBe(200);
+    expect(tile.body.length).toBeGreaterThan(100);
+  });
+
   it('refuses a file that is not an image, whatever its name, with 415 and keeps nothing', async () => {
     await setUp();
     const res = await upload(Buffer.from('this is a text file pretending to be a plan'), 'plan.png');
