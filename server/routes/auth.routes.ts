@@ -52,9 +52,12 @@ export function authRoutes(api: ApiRouter, deps: AuthRouteDeps) {
     response: loginResponse,
     errors: [429],
     before: [deps.limits.perAddress, deps.limits.perAccountFromAddress, deps.limits.perAccount],
-    handler: async ({ req, res }) => {
+    handler: async ({ req, res, body }) => {
       const user = await authenticate(deps.passport, req, res);
-      if (!user) throw new ApiError(401, 'unauthenticated', 'The e-mail address or the password is not correct.');
+      if (!user) {
+        await deps.auth.recordFailedSignIn(body.email, actorOf(req));
+        throw new ApiError(401, 'unauthenticated', 'The e-mail address or the password is not correct.');
+      }
       await new Promise<void>((resolve, reject) => req.logIn(user, (err) => (err ? reject(err) : resolve())));
       req.session.signedInAt = Date.now();
       const csrfToken = deps.generateCsrfToken(req, true);
@@ -114,8 +117,8 @@ export function authRoutes(api: ApiRouter, deps: AuthRouteDeps) {
     response: message,
     errors: [429],
     before: [deps.limits.resetRequests],
-    handler: async ({ body }) => {
-      await deps.passwords.requestReset(body.email);
+    handler: async ({ req, body }) => {
+      await deps.passwords.requestReset(body.email, actorOf(req));
       return { message: 'If an active account uses this address, a reset link is on its way. Check your e-mail.' };
     },
   });

@@ -30,6 +30,14 @@ export class AuthService {
     });
   }
 
+  /** A refused sign-in, so that an administrator can see guessing in the audit trail. */
+  async recordFailedSignIn(email: string, actor: Actor): Promise<void> {
+    const user = await this.store.repos.users.findByEmail(email);
+    await this.store.transaction((repos) =>
+      recordAudit(repos, { id: null, ip: actor.ip }, { action: 'sign-in-failed', entityType: 'user', entityId: user?.id ?? null, summary: `Sign-in refused for ${email}` }),
+    );
+  }
+
   async recordSignOut(user: Express.User, actor: Actor): Promise<void> {
     await this.store.transaction((repos) =>
       recordAudit(repos, actor, { action: 'sign-out', entityType: 'user', entityId: user.id, summary: `${user.email} signed out` }),

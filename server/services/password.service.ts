@@ -22,14 +22,23 @@ export class PasswordService {
    * Sends a reset link to an active account. The answer neither says nor, by waiting on the mail
    * server, shows whether the account exists: the mail goes out after the answer.
    */
-  async requestReset(email: string): Promise<void> {
+  async requestReset(email: string, actor: Actor): Promise<void> {
     const user = await this.store.repos.users.findByEmail(email);
-    if (!user || user.status !== 'active') return;
+    const active = user?.status === 'active' ? user : null;
     const { token, hash } = newToken();
     const expiresAt = new Date(Date.now() + this.config.passwordResetTtlMinutes * 60_000);
-    await this.store.transaction((repos) => repos.passwordResets.create({ userId: user.id, tokenHash: hash, expiresAt }));
-    const mail = passwordResetMail({ to: user.email, name: user.name, url: `${this.config.publicUrl}/reset-password#${token}`, expiresAt });
-    void this.mailer.send(mail).catch((err: unknown) => console.error(`Password reset mail to ${user.email} failed:`, err));
+    await this.store.transaction(async (repos) => {
+      await recordAudit(repos, { id: null, ip: actor.ip }, {
+        action: 'password-reset-request',
+        entityType: 'user',
+        entityId: user?.id ?? null,
+        summary: `Reset link asked for ${email}${active ? '' : ' (no active account; nothing sent)'}`,
+      });
+      if (active) await repos.passwordResets.create({ userId: active.id, tokenHash: hash, expiresAt });
+    });
+    if (!active) return;
+    const mail = passwordResetMail({ to: active.email, name: active.name, url: `${this.config.publicUrl}/reset-password#${token}`, expiresAt });
+    void this.mailer.send(mail).catch((err: unknown) => console.error(`Password reset mail to ${active.email} failed:`, err));
   }
 
   async completeReset(body: PasswordResetCompleteBody, ip: string | null): Promise<void> {

@@ -50,6 +50,20 @@ describe('POST /api/v1/auth/login', () => {
     expect(wrong.body.error.message).toBe('The e-mail address or the password is not correct.');
   });
 
+  it('writes refused sign-ins and reset requests to the audit trail', async () => {
+    ctx = await createTestApp();
+    const user = await buildUser(ctx.store, { role: 'curator' });
+    await new Client(ctx.app).signIn(user.email, 'not the right password at all');
+    await new Client(ctx.app).signIn('nobody@example.test', 'not the right password at all');
+    await new Client(ctx.app).post('/api/v1/auth/password-reset', { email: 'nobody@example.test' });
+    const rows = await ctx.dataSource.query(`SELECT actorId, action, entityId, summary FROM audit_events ORDER BY id`);
+    expect(rows).toEqual([
+      { actorId: null, action: 'sign-in-failed', entityId: String(user.id), summary: `Sign-in refused for ${user.email}` },
+      { actorId: null, action: 'sign-in-failed', entityId: null, summary: 'Sign-in refused for nobody@example.test' },
+      { actorId: null, action: 'password-reset-request', entityId: null, summary: 'Reset link asked for nobody@example.test (no active account; nothing sent)' },
+    ]);
+  });
+
   it('refuses a deactivated account with the same generic 401', async () => {
     ctx = await createTestApp();
     const user = await buildUser(ctx.store, { status: 'deactivated' });
