@@ -8,6 +8,7 @@ import { api, upload } from './client';
 export const listDecks = (vesselId: number) => api.get<Deck[]>(`/vessels/${vesselId}/decks`);
 export const createDeck = (vesselId: number, body: CreateDeckBody) => api.post<Deck>(`/vessels/${vesselId}/decks`, body);
 export const updateDeck = (id: number, body: UpdateDeckBody) => api.patch<Deck>(`/decks/${id}`, body);
+export const deleteDeck = (id: number) => api.delete<void>(`/decks/${id}`);
 export const calibrateDeck = (id: number, body: CalibrateDeckBody) => api.post<Deck>(`/decks/${id}/calibration`, body);
 
 export const getDeckPlans = (deckId: number) => api.get<DeckPlans>(`/decks/${deckId}/plan`);

@@ -38,6 +38,12 @@ describe('the ship map, end to end', () => {
     await expect.poll(() => page.getByText('Scale saved').first().isVisible()).toBe(true);
     await expect.poll(() => page.getByRole('img', { name: /^Scale: the bar is/ }).isVisible()).toBe(true);
 
+    await page.getByRole('button', { name: 'Set centerline' }).click();
+    await at(0.5, 0.5);
+    await expect.poll(() => page.getByText('Centerline set').first().isVisible()).toBe(true);
+    await expect.poll(() => page.getByRole('list', { name: 'Key to the plan' }).getByText('Centerline').isVisible()).toBe(true);
+    expect(await page.getByRole('button', { name: 'Set centerline' }).getAttribute('aria-pressed')).toBe('false');
+
     await page.getByRole('button', { name: 'Draw a compartment' }).click();
     for (const [fx, fy] of [[0.4, 0.4], [0.55, 0.4], [0.55, 0.6], [0.4, 0.6], [0.4, 0.4]] as const) {
       await at(fx, fy);
