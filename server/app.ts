@@ -94,7 +94,7 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
   userRoutes(api, new UserService(store, sessions));
   invitationRoutes(api, new InvitationService(store, mailer, config));
   vesselRoutes(api, vessels);
-  deckRoutes(api, new DeckService(store));
+  deckRoutes(api, new DeckService(store, files));
   compartmentRoutes(api, new CompartmentService(store));
   hazardRoutes(api, new HazardService(store));
   planRoutes(api, plans, { incomingDir: files.incoming, maxBytes: config.planMaxBytes });

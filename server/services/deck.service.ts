@@ -4,6 +4,7 @@ import type { DeckCalibrationRecord, DeckEntity } from '../db/entities/deck.enti
 import type { Repositories, Store } from '../db/store.js';
 import { ConflictError, NotFoundError, UnprocessableError } from '../http/errors.js';
 import { presentDeck } from '../presenters/deck.presenter.js';
+import type { FileStore } from '../storage/file-store.js';
 import { changesBetween, recordAudit, type Actor } from './audit.service.js';
 
 function staleVersion(what: string, current: number) {
@@ -11,7 +12,7 @@ function staleVersion(what: string, current: number) {
 }
 
 export class DeckService {
-  constructor(private readonly store: Store) {}
+  constructor(private readonly store: Store, private readonly files: FileStore) {}
 
   private async vesselOrFail(repos: Repositories, vesselId: number) {
     const vessel = await repos.vessels.findById(vesselId);
@@ -119,5 +120,7 @@ export class DeckService {
       await repos.decks.saveAll(rest);
       await recordAudit(repos, actor, { action: 'delete', entityType: 'deck', entityId: id, vesselId: deck.vesselId, summary: `Deck ${deck.name} deleted` });
     });
+    // Its plan rows went with it (cascade); their files go now, after the commit.
+    await this.files.remove(`plans/deck-${id}`);
   }
 }

@@ -157,6 +157,21 @@ describe('plan upload and tiles', () => {
   });
 });
 
+describe('deleting a deck', () => {
+  it('removes its plans and their files', async () => {
+    await setUp();
+    await upload(await planPng(600, 400));
+    await planState();
+    expect(filesUnder(ctx.files.path(`plans/deck-${deck.id}`)).length).toBeGreaterThan(5);
+    const fresh = (await curator.get(`/api/v1/decks/${deck.id}`)).body;
+    expect(fresh.abilities.delete).toBe(true);
+    expect((await curator.send('delete', `/api/v1/decks/${deck.id}`)).status).toBe(204);
+    expect(filesUnder(ctx.files.path('plans'))).toEqual([]);
+    const [{ n }] = await ctx.dataSource.query('SELECT COUNT(*) AS n FROM plans');
+    expect(n).toBe(0);
+  });
+});
+
 describe('replacing a plan', () => {
   async function drawnDeck() {
     await upload(await planPng(1000, 500));
