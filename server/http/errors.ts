@@ -42,6 +42,13 @@ export class ConflictError extends ApiError {
   }
 }
 
+/** A save that carried an older `version` than the record's: someone else changed it first. */
+export class StaleVersionError extends ConflictError {
+  constructor(subject: string, current: number, pronoun = 'it') {
+    super(`Someone else changed ${subject} since you opened ${pronoun}. Reload to see their changes.`, { version: `current version is ${current}` });
+  }
+}
+
 export class UnprocessableError extends ApiError {
   constructor(message: string, fields?: Record<string, string>) {
     super(422, 'unprocessable', message, fields);

@@ -7,7 +7,7 @@ import type { CompartmentEntity } from '../db/entities/compartment.entity.js';
 import type { DeckEntity } from '../db/entities/deck.entity.js';
 import type { VesselEntity } from '../db/entities/vessel.entity.js';
 import type { Repositories, Store } from '../db/store.js';
-import { ConflictError, NotFoundError, UnprocessableError } from '../http/errors.js';
+import { ConflictError, NotFoundError, StaleVersionError, UnprocessableError } from '../http/errors.js';
 import { presentCompartment } from '../presenters/compartment.presenter.js';
 import { changesBetween, recordAudit, type Actor } from './audit.service.js';
 
@@ -96,7 +96,7 @@ export class CompartmentService {
       const compartment = await repos.compartments.findById(id);
       if (!compartment) throw new NotFoundError('The compartment');
       if (compartment.version !== body.version) {
-        throw new ConflictError('Someone else changed this compartment since you opened it. Reload to see their changes.', { version: `current version is ${compartment.version}` });
+        throw new StaleVersionError('this compartment', compartment.version);
       }
       const vessel = (await repos.vessels.findById(compartment.vesselId))!;
       const { version: _version, ...fields } = body;

@@ -2,14 +2,10 @@ import { calibrateFromFrames, calibrateFromPoints, CalibrationError } from '../.
 import type { CalibrateDeckBody, CreateDeckBody, UpdateDeckBody } from '../../shared/schemas/decks.js';
 import type { DeckCalibrationRecord, DeckEntity } from '../db/entities/deck.entity.js';
 import type { Repositories, Store } from '../db/store.js';
-import { ConflictError, NotFoundError, UnprocessableError } from '../http/errors.js';
+import { ConflictError, NotFoundError, StaleVersionError, UnprocessableError } from '../http/errors.js';
 import { presentDeck } from '../presenters/deck.presenter.js';
 import type { FileStore } from '../storage/file-store.js';
 import { changesBetween, recordAudit, type Actor } from './audit.service.js';
-
-function staleVersion(what: string, current: number) {
-  return new ConflictError(`Someone else changed this ${what} since you opened it. Reload to see their changes.`, { version: `current version is ${current}` });
-}
 
 export class DeckService {
   constructor(private readonly store: Store, private readonly files: FileStore) {}
@@ -50,7 +46,7 @@ export class DeckService {
     const deck = await this.store.transaction(async (repos) => {
       const deck = await repos.decks.findById(id);
       if (!deck) throw new NotFoundError('The deck');
-      if (deck.version !== body.version) throw staleVersion('deck', deck.version);
+      if (deck.version !== body.version) throw new StaleVersionError('this deck', deck.version);
       const { version: _version, position, ...fields } = body;
       if (fields.centerlineY != null && deck.planHeight !== null && fields.centerlineY > deck.planHeight) {
         throw new UnprocessableError('The centerline must lie on the plan.', { centerlineY: `The plan is ${deck.planHeight} units high.` });
@@ -79,7 +75,7 @@ export class DeckService {
     const deck = await this.store.transaction(async (repos) => {
       const deck = await repos.decks.findById(id);
       if (!deck) throw new NotFoundError('The deck');
-      if (deck.version !== body.version) throw staleVersion('deck', deck.version);
+      if (deck.version !== body.version) throw new StaleVersionError('this deck', deck.version);
       if (deck.planWidth !== null && deck.planHeight !== null) {
         const off = [body.a, body.b].some(([x, y]) => x < 0 || y < 0 || x > deck.planWidth! || y > deck.planHeight!);
         if (off) throw new UnprocessableError('Both calibration points must lie on the plan.', { a: 'Click on the plan.', b: 'Click on the plan.' });

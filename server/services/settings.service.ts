@@ -1,6 +1,6 @@
 import type { UpdateSettingsBody } from '../../shared/schemas/settings.js';
 import type { Store } from '../db/store.js';
-import { ConflictError } from '../http/errors.js';
+import { StaleVersionError } from '../http/errors.js';
 import { presentSettings } from '../presenters/settings.presenter.js';
 import { changesBetween, recordAudit, type Actor } from './audit.service.js';
 
@@ -15,7 +15,7 @@ export class SettingsService {
     const saved = await this.store.transaction(async (repos) => {
       const settings = await repos.settings.get();
       if (settings.version !== body.version) {
-        throw new ConflictError('Someone else changed the settings since you opened them. Reload to see their changes.', { version: `current version is ${settings.version}` });
+        throw new StaleVersionError('the settings', settings.version, 'them');
       }
       const { version: _version, ...fields } = body;
       const changes = changesBetween(settings, fields, ['organisationName', 'country', 'currency', 'unitSystem', 'contactEmail']);

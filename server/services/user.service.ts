@@ -2,7 +2,7 @@ import type { UpdateUserBody, UsersQuery } from '../../shared/schemas/users.js';
 import { ROLE_LABELS } from '../../shared/roles.js';
 import type { DatabaseSessionStore } from '../auth/session-store.js';
 import type { Store } from '../db/store.js';
-import { ConflictError, NotFoundError, UnprocessableError } from '../http/errors.js';
+import { NotFoundError, StaleVersionError, UnprocessableError } from '../http/errors.js';
 import { presentUser } from '../presenters/user.presenter.js';
 import { changesBetween, recordAudit, type Actor } from './audit.service.js';
 
@@ -25,7 +25,7 @@ export class UserService {
       const user = await repos.users.findById(id);
       if (!user) throw new NotFoundError('The user');
       if (user.version !== body.version) {
-        throw new ConflictError('Someone else changed this person since you opened it. Reload to see their changes.', { version: `current version is ${user.version}` });
+        throw new StaleVersionError('this person', user.version);
       }
       const { version: _version, ...fields } = body;
       if (fields.role && fields.role !== 'admin' && user.role === 'admin' && user.status === 'active' && (await repos.users.countActiveAdmins()) <= 1) {

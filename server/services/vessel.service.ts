@@ -3,7 +3,7 @@ import type { createVesselBody } from '../../shared/schemas/vessels.js';
 import type { z } from 'zod';
 import type { Store } from '../db/store.js';
 import type { VesselEntity } from '../db/entities/vessel.entity.js';
-import { ConflictError, NotFoundError } from '../http/errors.js';
+import { ConflictError, NotFoundError, StaleVersionError } from '../http/errors.js';
 import { presentPublicVessel, presentVessel } from '../presenters/vessel.presenter.js';
 import { changesBetween, recordAudit, type Actor } from './audit.service.js';
 
@@ -49,7 +49,7 @@ export class VesselService {
       const vessel = await repos.vessels.findById(id);
       if (!vessel) throw new NotFoundError('The vessel');
       if (vessel.version !== body.version) {
-        throw new ConflictError('Someone else changed this vessel since you opened it. Reload to see their changes.', { version: `current version is ${vessel.version}` });
+        throw new StaleVersionError('this vessel', vessel.version);
       }
       const { version: _version, ...fields } = body;
       if (fields.name && fields.name.toLowerCase() !== vessel.name.toLowerCase() && (await repos.vessels.findByName(fields.name))) {
