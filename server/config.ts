@@ -39,6 +39,8 @@ export interface Config {
   /** Largest deck plan accepted, in bytes and in pixels a side. */
   planMaxBytes: number;
   planMaxSide: number;
+  /** Largest photo or document accepted, in bytes. */
+  mediaMaxBytes: number;
 }
 
 function int(value: string | undefined, fallback: number, name: string): number {
@@ -103,6 +105,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
     seedOnStart: bool(env.SEED_ON_START, nodeEnv !== 'production'),
     planMaxBytes: int(env.PLAN_MAX_MB, 300, 'PLAN_MAX_MB') * 1024 * 1024,
     planMaxSide: int(env.PLAN_MAX_SIDE, 40_000, 'PLAN_MAX_SIDE'),
+    mediaMaxBytes: int(env.MEDIA_MAX_MB, 50, 'MEDIA_MAX_MB') * 1024 * 1024,
   };
   return { ...config, ...overrides };
 }

@@ -20,6 +20,9 @@ export const PERMISSIONS = {
   deck: { read: STAFF, create: CURATOR, update: CURATOR, delete: CURATOR },
   compartment: { read: STAFF, create: CURATOR, update: CURATOR, delete: CURATOR },
   hazard: { read: STAFF, create: CONSERVATOR, update: CONSERVATOR, delete: CONSERVATOR },
+  artifact: { read: STAFF, create: CURATOR, update: CURATOR, move: CURATOR, archive: CURATOR, import: CURATOR },
+  /** Files on a record; the service also asks for the right to change the record they belong to. */
+  media: { read: STAFF, create: ['curator', 'conservator'], update: ['curator', 'conservator'], delete: ['curator', 'conservator'] },
 } as const satisfies Record<string, Record<string, readonly Role[]>>;
 
 export type Resource = keyof typeof PERMISSIONS;

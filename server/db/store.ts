@@ -1,14 +1,18 @@
 import type { DataSource, EntityManager } from 'typeorm';
+import { ArtifactMoveRepository } from './repositories/artifact-move.repository.js';
+import { ArtifactRepository } from './repositories/artifact.repository.js';
 import { AuditEventRepository } from './repositories/audit-event.repository.js';
 import { CompartmentRepository } from './repositories/compartment.repository.js';
 import { DeckRepository } from './repositories/deck.repository.js';
 import { HazardRepository } from './repositories/hazard.repository.js';
 import { InvitationRepository } from './repositories/invitation.repository.js';
+import { MediaRepository } from './repositories/media.repository.js';
 import { PasswordResetRepository } from './repositories/password-reset.repository.js';
 import { PlanRepository } from './repositories/plan.repository.js';
 import { SettingsRepository } from './repositories/settings.repository.js';
 import { UserRepository } from './repositories/user.repository.js';
 import { VesselRepository } from './repositories/vessel.repository.js';
+import { SearchIndex } from '../search/search-index.js';
 import { writeLock } from './write-lock.js';
 
 export interface Repositories {
@@ -22,6 +26,10 @@ export interface Repositories {
   compartments: CompartmentRepository;
   hazards: HazardRepository;
   plans: PlanRepository;
+  artifacts: ArtifactRepository;
+  artifactMoves: ArtifactMoveRepository;
+  media: MediaRepository;
+  search: SearchIndex;
 }
 
 function repositories(manager: EntityManager): Repositories {
@@ -36,6 +44,10 @@ function repositories(manager: EntityManager): Repositories {
     compartments: new CompartmentRepository(manager),
     hazards: new HazardRepository(manager),
     plans: new PlanRepository(manager),
+    artifacts: new ArtifactRepository(manager),
+    artifactMoves: new ArtifactMoveRepository(manager),
+    media: new MediaRepository(manager),
+    search: new SearchIndex(manager),
   };
 }
 

@@ -8,6 +8,7 @@ export function presentSettings(settings: OrganisationSettingsEntity): Organisat
     currency: settings.currency,
     unitSystem: settings.unitSystem,
     contactEmail: settings.contactEmail,
+    objectNumberPattern: settings.objectNumberPattern,
     updatedAt: settings.updatedAt.toISOString(),
     version: settings.version,
   };

@@ -120,6 +120,12 @@ export class CompartmentService {
     await this.store.transaction(async (repos) => {
       const compartment = await repos.compartments.findById(id);
       if (!compartment) throw new NotFoundError('The compartment');
+      const artifacts = await repos.artifacts.countInCompartment(id);
+      if (artifacts > 0) {
+        throw new ConflictError(`${compartment.designation} holds ${artifacts === 1 ? 'an artifact' : `${artifacts} artifacts`}. Move ${artifacts === 1 ? 'it' : 'them'} elsewhere first, so that no object loses its place.`);
+      }
+      const files = await repos.media.countForOwner('compartment', id);
+      if (files > 0) throw new ConflictError(`${compartment.designation} has ${files === 1 ? 'a photo or document' : `${files} photos or documents`}. Delete ${files === 1 ? 'it' : 'them'} first.`);
       await repos.compartments.remove(id);
       await recordAudit(repos, actor, {
         action: 'delete',

@@ -1,5 +1,3 @@
-import { createHash } from 'node:crypto';
-import { createReadStream } from 'node:fs';
 import { unlink } from 'node:fs/promises';
 import path from 'node:path';
 import { fileTypeFromFile } from 'file-type';
@@ -13,21 +11,12 @@ import type { Repositories, Store } from '../db/store.js';
 import { ApiError, NotFoundError, UnprocessableError, ValidationError } from '../http/errors.js';
 import { planVersion, presentPlan } from '../presenters/plan.presenter.js';
 import type { FileStore } from '../storage/file-store.js';
+import { sha256File } from '../storage/hash-file.js';
 import { recordAudit, type Actor } from './audit.service.js';
 import { buildPyramid } from './plan-tiler.js';
 
 const EXTENSIONS: Record<string, string> = { 'image/png': 'png', 'image/jpeg': 'jpg', 'image/webp': 'webp', 'image/tiff': 'tif' };
 const SAME_ASPECT = 0.01;
-
-function sha256File(file: string): Promise<string> {
-  return new Promise((resolve, reject) => {
-    const hash = createHash('sha256');
-    createReadStream(file)
-      .on('data', (chunk) => hash.update(chunk))
-      .on('end', () => resolve(hash.digest('hex')))
-      .on('error', reject);
-  });
-}
 
 export interface UploadedFile {
   path: string;
@@ -194,6 +183,11 @@ export class PlanService {
         }
         compartment.outline = outline;
         await repos.compartments.save(compartment);
+      }
+      // The artifacts stay where they are on board; only the plan's pixels under them change.
+      for (const artifact of await repos.artifacts.placedOnDeck(deck.id)) {
+        const point = scale(artifact.point!);
+        await repos.artifacts.setPoint(artifact.id, off(point) ? [Math.min(Math.max(point[0], 0), plan.width), Math.min(Math.max(point[1], 0), plan.height)] : point);
       }
       if (deck.centerlineY !== null) deck.centerlineY *= sy;
       if (deck.calibration && deck.metresPerUnit) {

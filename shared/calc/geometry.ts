@@ -107,3 +107,14 @@ export function polygonCentroid(points: readonly Point[]): Point {
   }
   return [cx / (3 * twiceArea), cy / (3 * twiceArea)];
 }
+
+/** Whether a point lies inside a simple polygon (even-odd ray casting; points on an edge may fall either way). */
+export function pointInPolygon([px, py]: Point, polygon: readonly Point[]): boolean {
+  let inside = false;
+  for (let i = 0, j = polygon.length - 1; i < polygon.length; j = i++) {
+    const [xi, yi] = polygon[i]!;
+    const [xj, yj] = polygon[j]!;
+    if (yi > py !== yj > py && px < ((xj - xi) * (py - yi)) / (yj - yi) + xi) inside = !inside;
+  }
+  return inside;
+}

@@ -13,3 +13,6 @@ export * from './decks.js';
 export * from './compartments.js';
 export * from './hazards.js';
 export * from './plans.js';
+export * from './artifacts.js';
+export * from './media.js';
+export * from './artifact-import.js';

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { PATTERN_PROBLEM_MESSAGES, patternProblem } from '../calc/object-number.js';
 import { text } from './common.js';
 
 export const UNIT_SYSTEMS = ['us-customary', 'metric'] as const;
@@ -11,6 +12,7 @@ export const organisationSettings = z
     currency: z.string(),
     unitSystem: z.enum(UNIT_SYSTEMS),
     contactEmail: z.string(),
+    objectNumberPattern: z.string(),
     updatedAt: z.string(),
     version: z.number().int(),
   })
@@ -24,6 +26,14 @@ export const updateSettingsBody = z
     currency: z.string().trim().toUpperCase().regex(/^[A-Z]{3}$/, 'Use the three-letter currency code of ISO 4217 (e.g. USD).'),
     unitSystem: z.enum(UNIT_SYSTEMS, { error: 'Choose US customary or metric units.' }),
     contactEmail: z.union([z.literal(''), z.email('Enter a valid e-mail address.')]),
+    objectNumberPattern: z
+      .string()
+      .trim()
+      .max(40, 'A pattern has at most 40 characters.')
+      .superRefine((value, ctx) => {
+        const problem = patternProblem(value);
+        if (problem) ctx.addIssue({ code: 'custom', message: PATTERN_PROBLEM_MESSAGES[problem] });
+      }),
     version: z.number().int().min(1),
   })
   .partial()

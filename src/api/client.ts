@@ -95,16 +95,18 @@ export const api = {
   delete: <T>(path: string) => request<T>('DELETE', path),
 };
 
-/** Sends one file as multipart `file`, reporting the share sent (0–1) as it goes. */
-export async function upload<T>(path: string, file: File, onProgress?: (fraction: number) => void): Promise<T> {
+/** Sends one file as multipart `file`, reporting the share sent (0–1) as it goes; `signal` aborts it. */
+export async function upload<T>(path: string, file: File, onProgress?: (fraction: number) => void, options: { query?: Query; signal?: AbortSignal } = {}): Promise<T> {
   if (!csrfToken) await fetchCsrfToken();
   return new Promise<T>((resolve, reject) => {
     const xhr = new XMLHttpRequest();
-    xhr.open('POST', url(path));
+    xhr.open('POST', url(path, options.query));
     xhr.setRequestHeader('accept', 'application/json');
     if (csrfToken) xhr.setRequestHeader('x-csrf-token', csrfToken);
     xhr.upload.onprogress = (event) => event.lengthComputable && onProgress?.(event.loaded / event.total);
     xhr.onerror = () => reject(new ApiRequestError(0, 'network', 'Shipkeeper cannot be reached. Check the connection and try again.'));
+    xhr.onabort = () => reject(new ApiRequestError(0, 'network', 'The upload was cancelled.'));
+    options.signal?.addEventListener('abort', () => xhr.abort(), { once: true });
     xhr.onload = () => {
       let data: unknown = null;
       try {
@@ -121,4 +123,9 @@ export async function upload<T>(path: string, file: File, onProgress?: (fraction
     form.append('file', file);
     xhr.send(form);
   });
+}
+
+/** The address of an API resource, for links and downloads (CSV export). */
+export function apiUrl(path: string, query?: Query): string {
+  return url(path, query);
 }

@@ -1,7 +1,10 @@
+import { ArtifactMoveEntity } from './artifact-move.entity.js';
+import { ArtifactEntity } from './artifact.entity.js';
 import { AuditEventEntity } from './audit-event.entity.js';
 import { CompartmentEntity } from './compartment.entity.js';
 import { DeckEntity } from './deck.entity.js';
 import { HazardEntity } from './hazard.entity.js';
+import { MediaEntity } from './media.entity.js';
 import { InvitationEntity } from './invitation.entity.js';
 import { OrganisationSettingsEntity } from './organisation-settings.entity.js';
 import { PasswordResetEntity } from './password-reset.entity.js';
@@ -10,6 +13,6 @@ import { SessionEntity } from './session.entity.js';
 import { UserEntity } from './user.entity.js';
 import { VesselEntity } from './vessel.entity.js';
 
-export { AuditEventEntity, CompartmentEntity, DeckEntity, HazardEntity, InvitationEntity, OrganisationSettingsEntity, PasswordResetEntity, PlanEntity, SessionEntity, UserEntity, VesselEntity };
+export { ArtifactEntity, ArtifactMoveEntity, MediaEntity, AuditEventEntity, CompartmentEntity, DeckEntity, HazardEntity, InvitationEntity, OrganisationSettingsEntity, PasswordResetEntity, PlanEntity, SessionEntity, UserEntity, VesselEntity };
 
-export const entities = [UserEntity, VesselEntity, OrganisationSettingsEntity, AuditEventEntity, SessionEntity, InvitationEntity, PasswordResetEntity, DeckEntity, CompartmentEntity, HazardEntity, PlanEntity];
+export const entities = [UserEntity, VesselEntity, OrganisationSettingsEntity, AuditEventEntity, SessionEntity, InvitationEntity, PasswordResetEntity, DeckEntity, CompartmentEntity, HazardEntity, PlanEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity];

@@ -22,6 +22,10 @@ export class OrganisationSettingsEntity {
   @Column({ type: 'varchar', length: 254, default: '' })
   contactEmail: string;
 
+  /** How object numbers are written: YYYY and N between separators (shared/calc/object-number.ts). */
+  @Column({ type: 'varchar', length: 40, default: 'YYYY.N.N' })
+  objectNumberPattern: string;
+
   @UpdateDateColumn({ type: 'datetime' })
   updatedAt: Date;
 

@@ -14,6 +14,11 @@ export class AuditEventRepository {
     return this.repo.save(this.repo.create(fields));
   }
 
+  /** The latest events on one record, newest first. */
+  latestFor(entityType: string, entityId: number, count: number) {
+    return this.repo.find({ where: { entityType, entityId: String(entityId) }, relations: { actor: true }, order: { id: 'DESC' }, take: count });
+  }
+
   page(query: AuditEventsQuery) {
     const qb = this.repo.createQueryBuilder('event').leftJoinAndSelect('event.actor', 'actor');
     if (query.actorId) qb.andWhere('event.actorId = :actorId', { actorId: query.actorId });

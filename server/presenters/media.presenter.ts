@@ -1,0 +1,41 @@
+import { can } from '../../shared/permissions.js';
+import type { Media, MediaOwnerType } from '../../shared/schemas/media.js';
+import type { MediaEntity } from '../db/entities/media.entity.js';
+
+export function mediaUrl(id: number, variant: 'thumb' | 'display' | 'original'): string {
+  return `/api/v1/media/${id}/${variant}`;
+}
+
+const OWNER_RESOURCE: Record<MediaOwnerType, 'artifact' | 'compartment'> = { artifact: 'artifact', compartment: 'compartment' };
+
+/** Whether a role may add, change or delete files on this kind of record. */
+export function canChangeMediaOf(role: Express.User['role'], ownerType: MediaOwnerType, action: 'create' | 'update' | 'delete'): boolean {
+  return can(role, 'media', action) && can(role, OWNER_RESOURCE[ownerType], 'update');
+}
+
+export function presentMedia(media: MediaEntity, viewer: Express.User): Media {
+  const photo = media.kind === 'photo';
+  return {
+    id: media.id,
+    vesselId: media.vesselId,
+    ownerType: media.ownerType,
+    ownerId: media.ownerId,
+    kind: media.kind,
+    mimeType: media.mimeType as Media['mimeType'],
+    fileName: media.fileName,
+    byteSize: media.byteSize,
+    width: media.width,
+    height: media.height,
+    takenAt: media.takenAt,
+    caption: media.caption,
+    credit: media.credit,
+    altText: media.altText,
+    rights: media.rights,
+    publishable: photo && media.altText.trim().length > 0,
+    urls: { thumb: photo ? mediaUrl(media.id, 'thumb') : null, display: photo ? mediaUrl(media.id, 'display') : null, original: mediaUrl(media.id, 'original') },
+    uploadedBy: media.uploadedBy ? { id: media.uploadedBy.id, name: media.uploadedBy.name } : null,
+    createdAt: media.createdAt.toISOString(),
+    version: media.version,
+    abilities: { update: canChangeMediaOf(viewer.role, media.ownerType, 'update'), delete: canChangeMediaOf(viewer.role, media.ownerType, 'delete') },
+  };
+}

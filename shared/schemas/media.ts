@@ -1,0 +1,73 @@
+import { z } from 'zod';
+
+export const MEDIA_OWNER_TYPES = ['artifact', 'compartment'] as const;
+export type MediaOwnerType = (typeof MEDIA_OWNER_TYPES)[number];
+
+export const MEDIA_KINDS = ['photo', 'document'] as const;
+export type MediaKind = (typeof MEDIA_KINDS)[number];
+
+export const PHOTO_FORMATS = ['image/jpeg', 'image/png', 'image/webp'] as const;
+export const DOCUMENT_FORMATS = ['application/pdf'] as const;
+export const MEDIA_FORMATS = [...PHOTO_FORMATS, ...DOCUMENT_FORMATS] as const;
+/** The file picker's accept list. */
+export const MEDIA_ACCEPT = '.jpg,.jpeg,.png,.webp,.pdf,image/jpeg,image/png,image/webp,application/pdf';
+
+/** Longest side of each derivative, in pixels. */
+export const DERIVATIVE_SIZES = { thumb: 320, display: 1600 } as const;
+export type DerivativeName = keyof typeof DERIVATIVE_SIZES;
+export const DERIVATIVES = Object.keys(DERIVATIVE_SIZES) as DerivativeName[];
+
+export const media = z
+  .object({
+    id: z.number().int(),
+    vesselId: z.number().int(),
+    ownerType: z.enum(MEDIA_OWNER_TYPES),
+    ownerId: z.number().int(),
+    kind: z.enum(MEDIA_KINDS),
+    mimeType: z.enum(MEDIA_FORMATS),
+    fileName: z.string(),
+    byteSize: z.number().int(),
+    width: z.number().int().nullable(),
+    height: z.number().int().nullable(),
+    takenAt: z.string().nullable(),
+    caption: z.string(),
+    credit: z.string(),
+    altText: z.string(),
+    rights: z.string(),
+    /** Whether a public page may use it: a photo with alt text. */
+    publishable: z.boolean(),
+    urls: z.object({ thumb: z.string().nullable(), display: z.string().nullable(), original: z.string() }),
+    uploadedBy: z.object({ id: z.number().int(), name: z.string() }).nullable(),
+    createdAt: z.string(),
+    version: z.number().int(),
+    abilities: z.object({ update: z.boolean(), delete: z.boolean() }),
+  })
+  .meta({ id: 'Media' });
+export type Media = z.infer<typeof media>;
+export const mediaList = z.array(media);
+
+export const mediaOwnerQuery = z.object({
+  ownerType: z.enum(MEDIA_OWNER_TYPES, { error: 'Say what the file belongs to: artifact or compartment.' }),
+  ownerId: z.coerce.number({ error: 'Give the id of the record the file belongs to.' }).int().positive(),
+});
+export type MediaOwnerQuery = z.infer<typeof mediaOwnerQuery>;
+
+const line = (max: number, label: string) => z.string().trim().max(max, `${label} must be at most ${max} characters.`);
+
+export const updateMediaBody = z
+  .object({
+    caption: line(500, 'Caption'),
+    credit: line(200, 'Credit'),
+    altText: line(300, 'Alt text'),
+    rights: line(500, 'Rights note'),
+    version: z.number().int().min(1),
+  })
+  .partial()
+  .required({ version: true })
+  .meta({ id: 'UpdateMediaBody' });
+export type UpdateMediaBody = z.infer<typeof updateMediaBody>;
+
+export const mediaFileParams = z.object({
+  id: z.coerce.number().int().positive(),
+  variant: z.enum(['thumb', 'display', 'original']),
+});
