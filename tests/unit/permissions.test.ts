@@ -33,6 +33,18 @@ const MATRIX: Record<string, Record<Role, boolean>> = {
   'hazard.create': { admin: false, curator: false, conservator: true, docent: false, fundraiser: false },
   'hazard.update': { admin: false, curator: false, conservator: true, docent: false, fundraiser: false },
   'hazard.delete': { admin: false, curator: false, conservator: true, docent: false, fundraiser: false },
+  // The collection: curators keep the records; every staff role reads and may export.
+  'artifact.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
+  'artifact.create': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
+  'artifact.update': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
+  'artifact.move': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
+  'artifact.archive': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
+  'artifact.import': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
+  // Files: curators and conservators, further limited to records their role may change (media.presenter.ts).
+  'media.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
+  'media.create': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
+  'media.update': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
+  'media.delete': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
 };
 
 describe('permissions', () => {
