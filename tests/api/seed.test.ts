@@ -1,6 +1,8 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { clearData, seedDemo, SeedRefused } from '../../server/db/seed/seed.js';
 import { seedDemoPlans } from '../../server/db/seed/seed-plans.js';
+import { seedDemoCollection } from '../../server/db/seed/seed-collection.js';
+import { DEMO_ARTIFACTS } from '../../server/db/seed/demo-collection.js';
 import { signedInAs } from '../support/http.js';
 import { DEMO_COMPARTMENTS } from '../../server/db/seed/demo-ship-map.js';
 import { DEMO_PASSWORD, DEMO_USERS } from '../../server/db/seed/demo-data.js';
@@ -52,6 +54,30 @@ describe('demo seed', () => {
     // Boiler room, frames 40 to 60 at 24 in, 24 ft wide: 40 ft × 24 ft = 960 ft² (by hand).
     const boiler = rooms.find((r: { designation: string }) => r.designation === '2-40-0-E');
     expect(boiler.floorArea.squareFeet).toBeCloseTo(960, 6);
+  });
+
+  it('records the demo collection with places inside their compartments, histories, photos and search', async () => {
+    ctx = await createTestApp({}, { mail: false });
+    await seedDemo(ctx.dataSource, { bcryptCost: 4 });
+    await seedDemoPlans(ctx.dataSource, ctx.config);
+    await seedDemoCollection(ctx.dataSource, ctx.config);
+    const { client } = await signedInAs(ctx.app, ctx.store, 'docent');
+    const [vessel] = (await client.get('/api/v1/vessels?sort=createdAt')).body.items;
+    const list = (await client.get(`/api/v1/vessels/${vessel.id}/artifacts?pageSize=100`)).body;
+    expect(list.total).toBe(DEMO_ARTIFACTS.length);
+    expect(list.total).toBeGreaterThanOrEqual(30);
+    const statuses = new Set(list.items.map((a: { status: string }) => a.status));
+    expect([...statuses].sort()).toEqual(['deaccessioned', 'in-place', 'in-store', 'missing', 'on-loan']);
+    const placed = list.items.filter((a: { location: { point: unknown } }) => a.location.point);
+    expect(placed.length).toBeGreaterThan(20);
+    const clock = list.items.find((a: { objectNumber: string }) => a.objectNumber === '2003.1.3');
+    const history = (await client.get(`/api/v1/artifacts/${clock.id}/moves`)).body;
+    expect(history.map((m: { kind: string; to: { status: string } }) => `${m.kind}:${m.to.status}`)).toEqual(['moved:in-place', 'moved:in-store', 'recorded:in-place']);
+    const withPhotos = list.items.filter((a: { cover: unknown }) => a.cover);
+    expect(withPhotos.length).toBe(DEMO_ARTIFACTS.filter((a) => a.photo).length);
+    const photo = (await client.get(`/api/v1/media?ownerType=artifact&ownerId=${withPhotos[0].id}`)).body[0];
+    expect(photo).toMatchObject({ kind: 'photo', width: 1200, height: 900, takenAt: expect.stringMatching(/^\d{4}-\d\d-\d\dT/) });
+    expect((await client.get(`/api/v1/vessels/${vessel.id}/artifacts?q=gauge`)).body.total).toBeGreaterThanOrEqual(3);
   });
 
   it('refuses to run when NODE_ENV=production', async () => {

@@ -3,6 +3,7 @@ import { loadConfig } from '../../config.js';
 import { openDatabase } from '../data-source.js';
 import { clearData, seedDemo } from './seed.js';
 import { seedDemoPlans } from './seed-plans.js';
+import { seedDemoCollection } from './seed-collection.js';
 import { FileStore } from '../../storage/file-store.js';
 
 const config = loadConfig();
@@ -10,8 +11,10 @@ try {
   const dataSource = await openDatabase(config.databasePath);
   await clearData(dataSource);
   await new FileStore(config.uploadsDir).remove('plans');
+  await new FileStore(config.uploadsDir).remove('media');
   await seedDemo(dataSource, { bcryptCost: config.bcryptCost });
   await seedDemoPlans(dataSource, config);
+  await seedDemoCollection(dataSource, config);
   await dataSource.destroy();
   console.log(`Demo data written to ${config.databasePath}.`);
 } catch (err) {

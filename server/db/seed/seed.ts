@@ -1,5 +1,6 @@
 import type { DataSource } from 'typeorm';
 import { hashPassword } from '../../auth/password-hash.js';
+import { SEARCH_TABLE } from '../../search/search-index.js';
 import { Store } from '../store.js';
 import { DEMO_ORGANISATION, DEMO_PASSWORD, DEMO_USERS, DEMO_VESSELS } from './demo-data.js';
 import { DEMO_COMPARTMENTS, DEMO_DECKS } from './demo-ship-map.js';
@@ -53,5 +54,6 @@ export async function clearData(dataSource: DataSource): Promise<void> {
     for (const entity of [...dataSource.entityMetadatas].reverse()) {
       await manager.createQueryBuilder().delete().from(entity.target).execute();
     }
+    await manager.query(`DELETE FROM ${SEARCH_TABLE}`);
   });
 }
