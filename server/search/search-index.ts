@@ -5,6 +5,8 @@ import { HIGHLIGHT_END, HIGHLIGHT_START } from '../../shared/schemas/artifacts.j
  * The one full-text index (SQLite FTS5, table `search_documents`). Each kind of record puts a
  * document in it when it is written, inside the same transaction; a list then joins the table by
  * `kind` and `record_id`. Later kinds (condition reports, tour stops) add themselves to SEARCH_KINDS.
+ * A document's kind and vessel are also one indexed token (`scope`), so that narrowing a search to
+ * them is a lookup in the index rather than a read of every matching row.
  */
 export const SEARCH_KINDS = ['artifact'] as const;
 export type SearchKind = (typeof SEARCH_KINDS)[number];
@@ -22,17 +24,25 @@ export interface SearchDocument {
   extra: string;
 }
 
-/** Column weights for bm25(), in the table's column order (the three unindexed columns first). */
-export const RANK_EXPRESSION = `bm25(${SEARCH_TABLE}, 0, 0, 0, 10.0, 5.0, 1.0, 2.0)`;
+/** Column weights for bm25(), in the table's column order: kind, record_id, vessel_id, scope, number, title, body, extra. */
+export const RANK_EXPRESSION = `bm25(${SEARCH_TABLE}, 0, 0, 0, 0, 10.0, 5.0, 1.0, 2.0)`;
+const COLUMN_INDEX = { title: 5, body: 6, extra: 7 } as const;
 
-export function highlightExpression(column: 'title' | 'body' | 'extra'): string {
-  const index = { title: 4, body: 5, extra: 6 }[column];
-  return `highlight(${SEARCH_TABLE}, ${index}, '${HIGHLIGHT_START}', '${HIGHLIGHT_END}')`;
+function highlightExpression(column: 'title'): string {
+  return `highlight(${SEARCH_TABLE}, ${COLUMN_INDEX[column]}, '${HIGHLIGHT_START}', '${HIGHLIGHT_END}')`;
 }
 
-export function snippetExpression(): string {
-  // -1: the column with the best match among all; 16 tokens around it.
-  return `snippet(${SEARCH_TABLE}, -1, '${HIGHLIGHT_START}', '${HIGHLIGHT_END}', '…', 16)`;
+function snippetExpression(column: 'body'): string {
+  return `snippet(${SEARCH_TABLE}, ${COLUMN_INDEX[column]}, '${HIGHLIGHT_START}', '${HIGHLIGHT_END}', '…', 16)`;
+}
+
+function scopeOf(kind: SearchKind, vesselId: number): string {
+  return `${kind}${vesselId}`;
+}
+
+/** What a person typed (see matchExpression), limited to one kind of record on one vessel. */
+export function scopedMatch(kind: SearchKind, vesselId: number, words: string): string {
+  return `scope : "${scopeOf(kind, vesselId)}" AND {number title body extra} : (${words})`;
 }
 
 /**
@@ -55,7 +65,7 @@ export function mergeHighlights(text: string): string {
 }
 
 /** Each document's rowid is derived from its kind and record, so replacing one is a lookup, not a scan. */
-function rowIdOf(kind: SearchKind, recordId: number): bigint {
+export function rowIdOf(kind: SearchKind, recordId: number): bigint {
   return BigInt(recordId) * 16n + BigInt(SEARCH_KINDS.indexOf(kind));
 }
 
@@ -65,16 +75,46 @@ export class SearchIndex {
   async put(doc: SearchDocument): Promise<void> {
     await this.remove(doc.kind, doc.recordId);
     // BigInt binds as INTEGER, so record_id compares with the records' integer keys.
-    await this.manager.query(`INSERT INTO ${SEARCH_TABLE} (rowid, kind, record_id, vessel_id, number, title, body, extra) VALUES (?, ?, ?, ?, ?, ?, ?, ?)`, [
+    await this.manager.query(`INSERT INTO ${SEARCH_TABLE} (rowid, kind, record_id, vessel_id, scope, number, title, body, extra) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)`, [
       rowIdOf(doc.kind, doc.recordId),
       doc.kind,
       BigInt(doc.recordId),
       BigInt(doc.vesselId),
+      scopeOf(doc.kind, doc.vesselId),
       doc.number,
       doc.title,
       doc.body,
       doc.extra,
     ]);
+  }
+
+  /** How many documents match a scoped expression. */
+  async count(scoped: string): Promise<number> {
+    const [row] = (await this.manager.query(`SELECT COUNT(*) AS n FROM ${SEARCH_TABLE} WHERE ${SEARCH_TABLE} MATCH ?`, [scoped])) as { n: number }[];
+    return Number(row?.n ?? 0);
+  }
+
+  /**
+   * Record ids of one page of matches of a scoped expression, best first (bm25), with `leading`
+   * (an exact identifier match) before all others. Used when nothing but the text narrows a list.
+   */
+  async rankedIds(kind: SearchKind, scoped: string, leading: number | null, offset: number, limit: number): Promise<number[]> {
+    const rows = (await this.manager.query(
+      `SELECT record_id AS id FROM ${SEARCH_TABLE} WHERE ${SEARCH_TABLE} MATCH ? ORDER BY rowid = ? DESC, ${RANK_EXPRESSION}, rowid LIMIT ? OFFSET ?`,
+      [scoped, leading === null ? -1n : rowIdOf(kind, leading), limit, offset],
+    )) as { id: number }[];
+    return rows.map((row) => Number(row.id));
+  }
+
+  /** Highlighted title and a snippet of the body of the given records, for one page of results. */
+  async highlights(kind: SearchKind, ids: number[], scoped: string): Promise<Map<number, { title: string; snippet: string }>> {
+    if (ids.length === 0) return new Map();
+    const rowIds = ids.map((id) => rowIdOf(kind, id));
+    const rows = (await this.manager.query(
+      `SELECT record_id AS id, ${highlightExpression('title')} AS title, ${snippetExpression('body')} AS snippet FROM ${SEARCH_TABLE} WHERE ${SEARCH_TABLE} MATCH ? AND rowid IN (${rowIds.map(() => '?').join(', ')})`,
+      [scoped, ...rowIds],
+    )) as { id: number; title: string; snippet: string }[];
+    return new Map(rows.map((row) => [Number(row.id), { title: mergeHighlights(row.title), snippet: mergeHighlights(row.snippet) }]));
   }
 
   async remove(kind: SearchKind, recordId: number): Promise<void> {

@@ -7,7 +7,6 @@ import type { Repositories, Store } from '../db/store.js';
 import { ConflictError, NotFoundError, UnprocessableError } from '../http/errors.js';
 import { compartmentLabel, presentArtifact, presentMarker, presentMove } from '../presenters/artifact.presenter.js';
 import type { SearchDocument } from '../search/search-index.js';
-import { mergeHighlights } from '../search/search-index.js';
 import { checkPlace } from './artifact-place.js';
 import { changesBetween, recordAudit, type Actor } from './audit.service.js';
 import { staleEditError } from './stale-edit.js';
@@ -137,7 +136,7 @@ export class ArtifactService {
       ...page,
       items: page.items.map(({ artifact, highlight }) => ({
         ...presentArtifact(artifact, artifact.coverMediaId ? (alts.get(artifact.coverMediaId) ?? null) : null, viewer),
-        highlight: highlight ? { name: mergeHighlights(highlight.name), snippet: mergeHighlights(highlight.snippet) } : null,
+        highlight,
       })),
     };
   }

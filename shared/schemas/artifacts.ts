@@ -112,7 +112,11 @@ export const artifactFilters = z.object({
 });
 export type ArtifactFilters = z.infer<typeof artifactFilters>;
 
-export const artifactsQuery = listQuery(ARTIFACT_SORTS, 'objectNumber').extend(artifactFilters.shape);
+const sortValues = [...ARTIFACT_SORTS, ...ARTIFACT_SORTS.map((s) => `-${s}` as const)] as const;
+/** Without `sort`: best match first when searching, else by object number. */
+export const artifactsQuery = listQuery(ARTIFACT_SORTS, 'objectNumber')
+  .extend(artifactFilters.shape)
+  .extend({ sort: z.enum(sortValues).optional() });
 export type ArtifactsQuery = z.infer<typeof artifactsQuery>;
 
 export const artifactPage = pageOf(artifactListItem).meta({ id: 'ArtifactPage' });

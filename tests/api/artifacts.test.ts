@@ -151,6 +151,15 @@ describe('artifact list and search', () => {
     const ranked = await curator.get(`/api/v1/vessels/${vesselId}/artifacts?q=whistle&sort=relevance`);
     expect(ranked.body.items.map((a: { objectNumber: string }) => a.objectNumber)).toEqual(['2019.6.1', '2019.6.2']);
     expect(ranked.body.items[0].highlight.name).toBe('\uE000Whistle\uE001');
+
+    // With a filter or another order the list joins the records; the exact number still leads.
+    const byName = await curator.get(`/api/v1/vessels/${vesselId}/artifacts?q=2019&sort=name&pageSize=3`);
+    expect(byName.body.total).toBe(5);
+    expect(byName.body.items.map((a: { name: string }) => a.name)).toEqual(['Lamp', 'Logbook', 'Pump']);
+    const exactFirst = await curator.get(`/api/v1/vessels/${vesselId}/artifacts?q=2019.4.12&sort=-name&category=tools`);
+    expect(exactFirst.body.items.map((a: { objectNumber: string }) => a.objectNumber)).toEqual(['2019.4.12', '2019.4.1']);
+    const filtered = await curator.get(`/api/v1/vessels/${vesselId}/artifacts?q=whistle&status=missing`);
+    expect(filtered.body).toMatchObject({ total: 0, items: [] });
   });
 
   it('keeps the index in step with edits, and treats search syntax as plain words', async () => {

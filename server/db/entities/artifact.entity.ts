@@ -9,6 +9,8 @@ import { VesselEntity } from './vessel.entity.js';
 @Index(['vesselId', 'objectNumberSort'])
 @Index(['vesselId', 'category'])
 @Index(['vesselId', 'status'])
+@Index(['vesselId', 'name'])
+@Index(['vesselId', 'updatedAt'])
 export class ArtifactEntity {
   @PrimaryGeneratedColumn({ type: 'integer' })
   id: number;
@@ -87,7 +89,6 @@ export class ArtifactEntity {
   @CreateDateColumn({ type: 'datetime' })
   createdAt: Date;
 
-  @Index()
   @UpdateDateColumn({ type: 'datetime' })
   updatedAt: Date;
 

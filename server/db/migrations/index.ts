@@ -1,7 +1,7 @@
 import { Foundation1796204951114 } from './1796204951114-Foundation.js';
 import { ShipMap1796208163044 } from './1796208163044-ShipMap.js';
 import { DeckPlans1796208850383 } from './1796208850383-DeckPlans.js';
-import { Collection1796214274510 } from './1796214274510-Collection.js';
+import { Collection1796215405776 } from './1796215405776-Collection.js';
 
 /** Every migration, oldest first; run at start by openDatabase(). */
-export const migrations = [Foundation1796204951114, ShipMap1796208163044, DeckPlans1796208850383, Collection1796214274510];
+export const migrations = [Foundation1796204951114, ShipMap1796208163044, DeckPlans1796208850383, Collection1796215405776];

@@ -1,7 +1,7 @@
-import type { EntityManager, SelectQueryBuilder } from 'typeorm';
+import { In, type EntityManager, type SelectQueryBuilder } from 'typeorm';
 import type { ARTIFACT_SORTS, ArtifactFilters, ArtifactsQuery } from '../../../shared/schemas/artifacts.js';
 import type { Page } from '../../../shared/schemas/common.js';
-import { RANK_EXPRESSION, SEARCH_TABLE, highlightExpression, matchExpression, snippetExpression } from '../../search/search-index.js';
+import { RANK_EXPRESSION, SEARCH_TABLE, SearchIndex, matchExpression, scopedMatch } from '../../search/search-index.js';
 import type { Point } from '../../../shared/calc/geometry.js';
 import { ArtifactEntity } from '../entities/artifact.entity.js';
 
@@ -16,7 +16,7 @@ const SORT_COLUMNS: Record<(typeof ARTIFACT_SORTS)[number], string> = {
   category: 'artifact.category',
   status: 'artifact.status',
   updatedAt: 'artifact.updatedAt',
-  relevance: 'rank',
+  relevance: RANK_EXPRESSION,
 };
 
 export class ArtifactRepository {
@@ -64,17 +64,15 @@ export class ArtifactRepository {
       .getMany();
   }
 
+  /** The filtered list as a lean query (no columns chosen yet): only what a filter needs is joined. */
   private filtered(vesselId: number, filters: ArtifactFilters): { qb: SelectQueryBuilder<ArtifactEntity>; match: string | null } {
-    const qb = this.repo
-      .createQueryBuilder('artifact')
-      .leftJoinAndSelect('artifact.compartment', 'compartment')
-      .leftJoinAndSelect('compartment.deck', 'deck')
-      .where('artifact.vesselId = :vesselId', { vesselId });
+    const qb = this.repo.createQueryBuilder('artifact').where('artifact.vesselId = :vesselId', { vesselId });
     if (filters.category) qb.andWhere('artifact.category = :category', { category: filters.category });
     if (filters.status) qb.andWhere('artifact.status = :status', { status: filters.status });
     if (filters.compartmentId) qb.andWhere('artifact.compartmentId = :compartmentId', { compartmentId: filters.compartmentId });
-    if (filters.deckId) qb.andWhere('compartment.deckId = :deckId', { deckId: filters.deckId });
-    const match = filters.q ? matchExpression(filters.q) : null;
+    if (filters.deckId) qb.innerJoin('artifact.compartment', 'compartment').andWhere('compartment.deckId = :deckId', { deckId: filters.deckId });
+    const words = filters.q ? matchExpression(filters.q) : null;
+    const match = words ? scopedMatch('artifact', vesselId, words) : null;
     if (match) {
       // FTS5 functions take the table's own name, so the join uses it as its alias.
       qb.innerJoin(SEARCH_TABLE, SEARCH_TABLE, `${SEARCH_TABLE}.record_id = artifact.id AND ${SEARCH_TABLE}.kind = 'artifact'`).andWhere(`${SEARCH_TABLE} MATCH :match`, { match });
@@ -82,45 +80,70 @@ export class ArtifactRepository {
     return { qb, match };
   }
 
+  /** Ids in order, then the rows with their places: sorting narrow rows is what keeps a page fast. */
+  private async loadInOrder(ids: number[]): Promise<ArtifactEntity[]> {
+    if (ids.length === 0) return [];
+    const rows = await this.repo.find({ where: { id: In(ids) }, relations: { compartment: { deck: true } } });
+    const byId = new Map(rows.map((row) => [row.id, row]));
+    return ids.flatMap((id) => byId.get(id) ?? []);
+  }
+
+  private static idsOf(rows: { id: number }[]): number[] {
+    return rows.map((row) => Number(row.id));
+  }
+
   /** A page of a vessel's artifacts; with `q`, only matches, ranked and highlighted. */
   async page(vesselId: number, query: ArtifactsQuery): Promise<Page<ArtifactHit>> {
     const { qb, match } = this.filtered(vesselId, query);
-    if (query.q && !match) return { items: [], total: 0, page: query.page, pageSize: query.pageSize };
-    const total = await qb.clone().getCount();
-    const descending = query.sort.startsWith('-');
-    let sort = (descending ? query.sort.slice(1) : query.sort) as keyof typeof SORT_COLUMNS;
+    const empty = { items: [], total: 0, page: query.page, pageSize: query.pageSize };
+    if (query.q && !match) return empty;
+    const requested = query.sort ?? (match ? 'relevance' : 'objectNumber');
+    const descending = requested.startsWith('-');
+    let sort = (descending ? requested.slice(1) : requested) as keyof typeof SORT_COLUMNS;
     if (sort === 'relevance' && !match) sort = 'objectNumber';
-    if (match) {
-      qb.addSelect(RANK_EXPRESSION, 'rank')
-        .addSelect(highlightExpression('title'), 'hl_name')
-        .addSelect(snippetExpression(), 'hl_snippet')
-        .addSelect('CASE WHEN artifact.objectNumber = :exact THEN 0 ELSE 1 END', 'exact')
-        .setParameter('exact', query.q!.trim().toUpperCase());
+    const direction = descending ? 'DESC' : 'ASC';
+    const offset = (query.page - 1) * query.pageSize;
+    const search = new SearchIndex(this.manager);
+    const exact = (query.q ?? '').trim().toUpperCase();
+    let ids: number[];
+    let total: number;
+    if (match && sort === 'relevance' && !descending && !query.category && !query.status && !query.deckId && !query.compartmentId) {
+      // Only the text narrows the list: the full-text index alone answers, without joining every match.
+      total = await search.count(match);
+      const exactHit = await this.findByNumber(vesselId, exact);
+      ids = await search.rankedIds('artifact', match, exactHit?.id ?? null, offset, query.pageSize);
+    } else {
+      total = await qb.clone().getCount();
+      qb.select('artifact.id', 'id');
+      // An exact object number comes first whatever the order asked for.
+      if (match) qb.addSelect('CASE WHEN artifact.objectNumber = :exact THEN 0 ELSE 1 END', 'exact').setParameter('exact', exact).orderBy('exact', 'ASC');
+      ids = ArtifactRepository.idsOf(
+        await qb
+          .addOrderBy(SORT_COLUMNS[sort], direction)
+          .addOrderBy('artifact.id', 'ASC')
+          .offset(offset)
+          .limit(query.pageSize)
+          .getRawMany<{ id: number }>(),
+      );
     }
-    // An exact object number comes first whatever the order asked for.
-    if (match) qb.orderBy('exact', 'ASC').addOrderBy(SORT_COLUMNS[sort], descending ? 'DESC' : 'ASC');
-    else qb.orderBy(SORT_COLUMNS[sort], descending ? 'DESC' : 'ASC');
-    qb.addOrderBy('artifact.id', 'ASC')
-      .offset((query.page - 1) * query.pageSize)
-      .limit(query.pageSize);
-    const { entities, raw } = await qb.getRawAndEntities<{ artifact_id: number; hl_name?: string; hl_snippet?: string }>();
-    const rawById = new Map<number, { hl_name?: string; hl_snippet?: string }>(raw.map((row) => [Number(row.artifact_id), row]));
-    const items = entities.map((artifact) => {
-      const row = rawById.get(artifact.id);
-      return { artifact, highlight: match && row ? { name: row.hl_name ?? artifact.name, snippet: row.hl_snippet ?? '' } : null };
+    const artifacts = await this.loadInOrder(ids);
+    const marks = match ? await search.highlights('artifact', ids, match) : null;
+    const items = artifacts.map((artifact) => {
+      const mark = marks?.get(artifact.id);
+      return { artifact, highlight: marks ? { name: mark?.title ?? artifact.name, snippet: mark?.snippet ?? '' } : null };
     });
     return { items, total, page: query.page, pageSize: query.pageSize };
   }
 
-  /** Every artifact the filters select, in object-number order (CSV export). */
+  /** Every artifact the filters select, in object-number order, a batch at a time (CSV export). */
   async *all(vesselId: number, filters: ArtifactFilters, batch = 500): AsyncGenerator<ArtifactEntity[]> {
     const { qb, match } = this.filtered(vesselId, filters);
     if (filters.q && !match) return;
-    qb.orderBy('artifact.objectNumberSort', 'ASC').addOrderBy('artifact.id', 'ASC');
+    qb.select('artifact.id', 'id').orderBy('artifact.objectNumberSort', 'ASC').addOrderBy('artifact.id', 'ASC');
     for (let offset = 0; ; offset += batch) {
-      const rows = await qb.clone().offset(offset).limit(batch).getMany();
-      if (rows.length) yield rows;
-      if (rows.length < batch) return;
+      const ids = ArtifactRepository.idsOf(await qb.clone().offset(offset).limit(batch).getRawMany<{ id: number }>());
+      if (ids.length) yield await this.loadInOrder(ids);
+      if (ids.length < batch) return;
     }
   }
 

@@ -1,12 +1,13 @@
 import { MigrationInterface, QueryRunner } from "typeorm";
 
-export class Collection1796214274510 implements MigrationInterface {
-    name = 'Collection1796214274510'
+export class Collection1796215405776 implements MigrationInterface {
+    name = 'Collection1796215405776'
 
     public async up(queryRunner: QueryRunner): Promise<void> {
         await queryRunner.query(`CREATE TABLE "artifacts" ("id" integer PRIMARY KEY AUTOINCREMENT NOT NULL, "vesselId" integer NOT NULL, "objectNumber" varchar(40) NOT NULL, "objectNumberSort" varchar(120) NOT NULL, "name" varchar(160) NOT NULL, "category" varchar(40) NOT NULL, "description" text NOT NULL DEFAULT (''), "dateOrPeriod" varchar(80) NOT NULL DEFAULT (''), "maker" varchar(200) NOT NULL DEFAULT (''), "materials" varchar(400) NOT NULL DEFAULT (''), "height" real, "width" real, "depth" real, "dimensionUnit" varchar(4) NOT NULL DEFAULT ('cm'), "significance" text NOT NULL DEFAULT (''), "status" varchar(20) NOT NULL DEFAULT ('in-place'), "deaccessionReason" text, "compartmentId" integer, "point" text, "coverMediaId" integer, "createdAt" datetime NOT NULL DEFAULT (datetime('now')), "updatedAt" datetime NOT NULL DEFAULT (datetime('now')), "version" integer NOT NULL)`);
         await queryRunner.query(`CREATE INDEX "IDX_4fc9f8b0b1f1465118712233ad" ON "artifacts" ("compartmentId") `);
-        await queryRunner.query(`CREATE INDEX "IDX_24a305546cb64dddb789162187" ON "artifacts" ("updatedAt") `);
+        await queryRunner.query(`CREATE INDEX "IDX_41bde8ffece96f88c75e9d0133" ON "artifacts" ("vesselId", "updatedAt") `);
+        await queryRunner.query(`CREATE INDEX "IDX_f97c539ab76b211d20facbb6fe" ON "artifacts" ("vesselId", "name") `);
         await queryRunner.query(`CREATE INDEX "IDX_362c9f09516fbdd2c0613bedaa" ON "artifacts" ("vesselId", "status") `);
         await queryRunner.query(`CREATE INDEX "IDX_8b778ae08de548acf1a97ae7e4" ON "artifacts" ("vesselId", "category") `);
         await queryRunner.query(`CREATE INDEX "IDX_e87844a564f3a1a18751d7c61b" ON "artifacts" ("vesselId", "objectNumberSort") `);
@@ -21,7 +22,8 @@ export class Collection1796214274510 implements MigrationInterface {
         await queryRunner.query(`DROP TABLE "organisation_settings"`);
         await queryRunner.query(`ALTER TABLE "temporary_organisation_settings" RENAME TO "organisation_settings"`);
         await queryRunner.query(`DROP INDEX "IDX_4fc9f8b0b1f1465118712233ad"`);
-        await queryRunner.query(`DROP INDEX "IDX_24a305546cb64dddb789162187"`);
+        await queryRunner.query(`DROP INDEX "IDX_41bde8ffece96f88c75e9d0133"`);
+        await queryRunner.query(`DROP INDEX "IDX_f97c539ab76b211d20facbb6fe"`);
         await queryRunner.query(`DROP INDEX "IDX_362c9f09516fbdd2c0613bedaa"`);
         await queryRunner.query(`DROP INDEX "IDX_8b778ae08de548acf1a97ae7e4"`);
         await queryRunner.query(`DROP INDEX "IDX_e87844a564f3a1a18751d7c61b"`);
@@ -31,7 +33,8 @@ export class Collection1796214274510 implements MigrationInterface {
         await queryRunner.query(`DROP TABLE "artifacts"`);
         await queryRunner.query(`ALTER TABLE "temporary_artifacts" RENAME TO "artifacts"`);
         await queryRunner.query(`CREATE INDEX "IDX_4fc9f8b0b1f1465118712233ad" ON "artifacts" ("compartmentId") `);
-        await queryRunner.query(`CREATE INDEX "IDX_24a305546cb64dddb789162187" ON "artifacts" ("updatedAt") `);
+        await queryRunner.query(`CREATE INDEX "IDX_41bde8ffece96f88c75e9d0133" ON "artifacts" ("vesselId", "updatedAt") `);
+        await queryRunner.query(`CREATE INDEX "IDX_f97c539ab76b211d20facbb6fe" ON "artifacts" ("vesselId", "name") `);
         await queryRunner.query(`CREATE INDEX "IDX_362c9f09516fbdd2c0613bedaa" ON "artifacts" ("vesselId", "status") `);
         await queryRunner.query(`CREATE INDEX "IDX_8b778ae08de548acf1a97ae7e4" ON "artifacts" ("vesselId", "category") `);
         await queryRunner.query(`CREATE INDEX "IDX_e87844a564f3a1a18751d7c61b" ON "artifacts" ("vesselId", "objectNumberSort") `);
@@ -51,7 +54,7 @@ export class Collection1796214274510 implements MigrationInterface {
         await queryRunner.query(`CREATE INDEX "IDX_89db8720bd9718c66dafea2e14" ON "media" ("vesselId") `);
         await queryRunner.query(`CREATE INDEX "IDX_1d7059788a50a43fab4781a037" ON "media" ("ownerType", "ownerId") `);
         // Written by hand: the full-text index is not an entity (server/search/search-index.ts).
-        await queryRunner.query(`CREATE VIRTUAL TABLE "search_documents" USING fts5(kind UNINDEXED, record_id UNINDEXED, vessel_id UNINDEXED, number, title, body, extra, tokenize = 'unicode61 remove_diacritics 2', prefix = '2 3')`);
+        await queryRunner.query(`CREATE VIRTUAL TABLE "search_documents" USING fts5(kind UNINDEXED, record_id UNINDEXED, vessel_id UNINDEXED, scope, number, title, body, extra, tokenize = 'unicode61 remove_diacritics 2', prefix = '2 3')`);
     }
 
     public async down(queryRunner: QueryRunner): Promise<void> {
@@ -74,7 +77,8 @@ export class Collection1796214274510 implements MigrationInterface {
         await queryRunner.query(`DROP INDEX "IDX_e87844a564f3a1a18751d7c61b"`);
         await queryRunner.query(`DROP INDEX "IDX_8b778ae08de548acf1a97ae7e4"`);
         await queryRunner.query(`DROP INDEX "IDX_362c9f09516fbdd2c0613bedaa"`);
-        await queryRunner.query(`DROP INDEX "IDX_24a305546cb64dddb789162187"`);
+        await queryRunner.query(`DROP INDEX "IDX_f97c539ab76b211d20facbb6fe"`);
+        await queryRunner.query(`DROP INDEX "IDX_41bde8ffece96f88c75e9d0133"`);
         await queryRunner.query(`DROP INDEX "IDX_4fc9f8b0b1f1465118712233ad"`);
         await queryRunner.query(`ALTER TABLE "artifacts" RENAME TO "temporary_artifacts"`);
         await queryRunner.query(`CREATE TABLE "artifacts" ("id" integer PRIMARY KEY AUTOINCREMENT NOT NULL, "vesselId" integer NOT NULL, "objectNumber" varchar(40) NOT NULL, "objectNumberSort" varchar(120) NOT NULL, "name" varchar(160) NOT NULL, "category" varchar(40) NOT NULL, "description" text NOT NULL DEFAULT (''), "dateOrPeriod" varchar(80) NOT NULL DEFAULT (''), "maker" varchar(200) NOT NULL DEFAULT (''), "materials" varchar(400) NOT NULL DEFAULT (''), "height" real, "width" real, "depth" real, "dimensionUnit" varchar(4) NOT NULL DEFAULT ('cm'), "significance" text NOT NULL DEFAULT (''), "status" varchar(20) NOT NULL DEFAULT ('in-place'), "deaccessionReason" text, "compartmentId" integer, "point" text, "coverMediaId" integer, "createdAt" datetime NOT NULL DEFAULT (datetime('now')), "updatedAt" datetime NOT NULL DEFAULT (datetime('now')), "version" integer NOT NULL)`);
@@ -84,7 +88,8 @@ export class Collection1796214274510 implements MigrationInterface {
         await queryRunner.query(`CREATE INDEX "IDX_e87844a564f3a1a18751d7c61b" ON "artifacts" ("vesselId", "objectNumberSort") `);
         await queryRunner.query(`CREATE INDEX "IDX_8b778ae08de548acf1a97ae7e4" ON "artifacts" ("vesselId", "category") `);
         await queryRunner.query(`CREATE INDEX "IDX_362c9f09516fbdd2c0613bedaa" ON "artifacts" ("vesselId", "status") `);
-        await queryRunner.query(`CREATE INDEX "IDX_24a305546cb64dddb789162187" ON "artifacts" ("updatedAt") `);
+        await queryRunner.query(`CREATE INDEX "IDX_f97c539ab76b211d20facbb6fe" ON "artifacts" ("vesselId", "name") `);
+        await queryRunner.query(`CREATE INDEX "IDX_41bde8ffece96f88c75e9d0133" ON "artifacts" ("vesselId", "updatedAt") `);
         await queryRunner.query(`CREATE INDEX "IDX_4fc9f8b0b1f1465118712233ad" ON "artifacts" ("compartmentId") `);
         await queryRunner.query(`ALTER TABLE "organisation_settings" RENAME TO "temporary_organisation_settings"`);
         await queryRunner.query(`CREATE TABLE "organisation_settings" ("id" integer PRIMARY KEY NOT NULL, "organisationName" varchar(160) NOT NULL, "country" varchar(2) NOT NULL DEFAULT ('US'), "currency" varchar(3) NOT NULL DEFAULT ('USD'), "unitSystem" varchar(20) NOT NULL DEFAULT ('us-customary'), "contactEmail" varchar(254) NOT NULL DEFAULT (''), "updatedAt" datetime NOT NULL DEFAULT (datetime('now')), "version" integer NOT NULL)`);
@@ -99,7 +104,8 @@ export class Collection1796214274510 implements MigrationInterface {
         await queryRunner.query(`DROP INDEX "IDX_e87844a564f3a1a18751d7c61b"`);
         await queryRunner.query(`DROP INDEX "IDX_8b778ae08de548acf1a97ae7e4"`);
         await queryRunner.query(`DROP INDEX "IDX_362c9f09516fbdd2c0613bedaa"`);
-        await queryRunner.query(`DROP INDEX "IDX_24a305546cb64dddb789162187"`);
+        await queryRunner.query(`DROP INDEX "IDX_f97c539ab76b211d20facbb6fe"`);
+        await queryRunner.query(`DROP INDEX "IDX_41bde8ffece96f88c75e9d0133"`);
         await queryRunner.query(`DROP INDEX "IDX_4fc9f8b0b1f1465118712233ad"`);
         await queryRunner.query(`DROP TABLE "artifacts"`);
     }
