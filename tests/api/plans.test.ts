@@ -186,12 +186,17 @@ describe('replacing a plan', () => {
   it('with the same proportions, carries outlines and the scale over to the new pixels', async () => {
     await setUp();
     const room = await drawnDeck();
+    const gauge = (await curator.post(`/api/v1/vessels/${room.vesselId}/artifacts`, { objectNumber: '2019.4.12', name: 'Gauge', category: 'instruments-and-gauges', compartmentId: room.id, point: [150, 150] })).body;
     const oldPlan = (await planState()).current;
     await upload(await planPng(2000, 1000));
     const state = await planState();
     expect(state.current).toMatchObject({ status: 'ready', width: 2000 });
     const moved = (await curator.get(`/api/v1/compartments/${room.id}`)).body;
     expect(moved.outline).toEqual([[200, 200], [600, 200], [600, 400], [200, 400]]);
+    // The artifact stays where it is on board: its point follows the pixels, and no move is recorded.
+    const after = (await curator.get(`/api/v1/artifacts/${gauge.id}`)).body;
+    expect(after).toMatchObject({ location: { point: [300, 300] }, version: gauge.version });
+    expect((await curator.get(`/api/v1/artifacts/${gauge.id}/moves`)).body).toHaveLength(1);
     // The same room, the same real size: 200 × 100 units at 0.02 m = 8 m² before and after.
     expect(moved.floorArea.squareMetres).toBeCloseTo(room.floorArea.squareMetres, 9);
     expect(filesUnder(ctx.files.path('plans')).some((f) => f.includes(`/${oldPlan.id}-`))).toBe(false);
