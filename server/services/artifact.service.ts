@@ -172,7 +172,10 @@ export class ArtifactService {
     await this.store.transaction(async (repos) => {
       const artifact = await this.loadForChange(repos, id, body.version);
       const { version: _version, ...fields } = body;
-      if (fields.objectNumber !== undefined) fields.objectNumber = await checkNumber(repos, artifact.vesselId, fields.objectNumber, id);
+      // A number kept as it was is not checked again: it may predate a change of the pattern.
+      if (fields.objectNumber !== undefined && fields.objectNumber.trim().toUpperCase() !== artifact.objectNumber) {
+        fields.objectNumber = await checkNumber(repos, artifact.vesselId, fields.objectNumber, id);
+      } else delete fields.objectNumber;
       const changes = changesBetween(artifact, fields, DESCRIBING);
       if (!changes) return;
       Object.assign(artifact, fields);

@@ -46,6 +46,11 @@ describe('artifact records', () => {
     expect((await admin.patch('/api/v1/settings', { objectNumberPattern: 'YYYY.N.x', version: settings.version })).status).toBe(400);
     expect((await admin.patch('/api/v1/settings', { objectNumberPattern: 'SK-YYYY-N', version: settings.version })).status).toBe(200);
     expect((await curator.post(`/api/v1/vessels/${vesselId}/artifacts`, { objectNumber: 'sk-2020-7', name: 'Lamp', category: 'furnishings', status: 'in-store' })).body.objectNumber).toBe('SK-2020-7');
+    // Records made under the old pattern keep their numbers and can still be edited.
+    const old = (await curator.get(`/api/v1/vessels/${vesselId}/artifacts?q=2019.4.12`)).body.items[0];
+    const edited = await curator.patch(`/api/v1/artifacts/${old.id}`, { objectNumber: '2019.4.12', name: 'Renamed', version: old.version });
+    expect(edited.status).toBe(200);
+    expect((await curator.patch(`/api/v1/artifacts/${old.id}`, { objectNumber: '2019.4.13', version: edited.body.version })).status).toBe(422);
   });
 
   it('refuses a point outside the compartment, off the plan, or without a compartment', async () => {
