@@ -1,9 +1,9 @@
-import multer from 'multer';
 import { importQuery, importResult } from '../../shared/schemas/artifact-import.js';
 import { artifactFilters } from '../../shared/schemas/artifacts.js';
 import { vesselParam } from '../../shared/schemas/decks.js';
 import type { ApiRouter } from '../http/api-router.js';
 import { allowed } from '../http/access.js';
+import { receiveFile } from '../http/receive-file.js';
 import { actorOf } from '../services/audit.service.js';
 import type { ArtifactImportService } from '../services/artifact-import.service.js';
 
@@ -11,7 +11,7 @@ const CSV_MAX_BYTES = 10 * 1024 * 1024;
 
 export function artifactImportRoutes(api: ApiRouter, imports: ArtifactImportService, options: { incomingDir: string }) {
   const tag = 'Collection';
-  const receive = multer({ dest: options.incomingDir, limits: { fileSize: CSV_MAX_BYTES, files: 1, fields: 2, parts: 3 } }).single('file');
+  const receive = receiveFile(options.incomingDir, CSV_MAX_BYTES, 'an import file');
 
   api.route({
     method: 'post',

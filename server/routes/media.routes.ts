@@ -1,14 +1,14 @@
-import multer from 'multer';
 import { idParam } from '../../shared/schemas/common.js';
 import { media, mediaFileParams, mediaList, mediaOwnerQuery, updateMediaBody } from '../../shared/schemas/media.js';
 import type { ApiRouter } from '../http/api-router.js';
 import { allowed } from '../http/access.js';
+import { receiveFile } from '../http/receive-file.js';
 import { actorOf } from '../services/audit.service.js';
 import type { MediaService } from '../services/media.service.js';
 
 export function mediaRoutes(api: ApiRouter, service: MediaService, options: { incomingDir: string; maxBytes: number }) {
   const tag = 'Media';
-  const receive = multer({ dest: options.incomingDir, limits: { fileSize: options.maxBytes, files: 1, fields: 2, parts: 3 } }).single('file');
+  const receive = receiveFile(options.incomingDir, options.maxBytes, 'a photo or document');
 
   api.route({
     method: 'get',

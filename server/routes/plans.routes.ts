@@ -1,14 +1,14 @@
-import multer from 'multer';
 import { idParam } from '../../shared/schemas/common.js';
 import { activatePlanBody, deckPlans, plan, planParams, tileParams } from '../../shared/schemas/plans.js';
 import type { ApiRouter } from '../http/api-router.js';
 import { allowed } from '../http/access.js';
+import { receiveFile } from '../http/receive-file.js';
 import { actorOf } from '../services/audit.service.js';
 import type { PlanService } from '../services/plan.service.js';
 
 export function planRoutes(api: ApiRouter, plans: PlanService, options: { incomingDir: string; maxBytes: number }) {
   const tag = 'Ship map';
-  const receive = multer({ dest: options.incomingDir, limits: { fileSize: options.maxBytes, files: 1, fields: 5, parts: 6 } }).single('file');
+  const receive = receiveFile(options.incomingDir, options.maxBytes, 'a deck plan');
 
   api.route({
     method: 'get',

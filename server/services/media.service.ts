@@ -83,7 +83,7 @@ export class MediaService {
       const owner = await this.ownerOf(this.store.repos, query.ownerType, query.ownerId);
       const type = await fileTypeFromFile(file.path);
       if (!type || !(MEDIA_FORMATS as readonly string[]).includes(type.mime)) {
-        throw new ApiError(415, 'unsupported_media_type', `${safeFileName(file.originalname)} is not a JPEG, PNG, WebP or PDF file, whatever its name says.`, { file: 'Not a JPEG, PNG, WebP or PDF file.' });
+        throw new ApiError(415, 'unsupported_media_type', 'This file is not a JPEG, PNG, WebP or PDF file, whatever its name says.', { file: 'Not a JPEG, PNG, WebP or PDF file.' });
       }
       const kind = (PHOTO_FORMATS as readonly string[]).includes(type.mime) ? 'photo' : 'document';
       work = await this.files.scratch(`media-${randomUUID()}`);
@@ -92,7 +92,7 @@ export class MediaService {
       let facts: PhotoFacts | null = null;
       if (kind === 'photo') {
         facts = await makeDerivatives(original, work).catch(() => {
-          throw new ApiError(415, 'unsupported_media_type', `${safeFileName(file.originalname)} could not be read as an image. It may be damaged.`, { file: 'Unreadable image.' });
+          throw new ApiError(415, 'unsupported_media_type', 'This file could not be read as an image. It may be damaged.', { file: 'Unreadable image.' });
         });
       } else if (!(DOCUMENT_FORMATS as readonly string[]).includes(type.mime)) {
         throw new ApiError(415, 'unsupported_media_type', 'Only PDF documents are accepted.', { file: 'Not a PDF.' });

@@ -99,6 +99,8 @@ describe('bad uploads lose nothing and keep nothing', () => {
     expect(fake.body.error).toMatchObject({ code: 'unsupported_media_type', fields: { file: expect.any(String) } });
     const huge = await uploadTo(curator, artifactId, Buffer.concat([await cameraJpeg(), Buffer.alloc(300_000)]), 'big.jpg');
     expect(huge.status).toBe(413);
+    // The limit of this test app is 200,000 bytes.
+    expect(huge.body.error.message).toBe('The file is larger than 0.2 MB, the most this server accepts for a photo or document.');
     // A JPEG header with nothing decodable after it.
     const broken = await uploadTo(curator, artifactId, Buffer.from([0xff, 0xd8, 0xff, 0xe0, 0, 16, 0x4a, 0x46, 0x49, 0x46, 0, 1, 1, 0, 0, 1, 0, 1, 0, 0]), 'broken.jpg');
     expect(broken.status).toBe(415);
