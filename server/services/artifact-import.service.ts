@@ -173,7 +173,7 @@ export class ArtifactImportService {
     if (!vessel) throw new NotFoundError('The vessel');
     const columns = ARTIFACT_CSV_COLUMNS.map((c) => c.name);
     // escapeFormulae: a cell starting with = + - @ is prefixed with ' so spreadsheets do not run it.
-    write(Papa.unparse({ fields: columns, data: [] }, { escapeFormulae: true }) + '\r\n');
+    write(Papa.unparse([columns], { newline: '\r\n' }) + '\r\n');
     for await (const batch of this.store.repos.artifacts.all(vesselId, filters)) {
       const rows = batch.map((a) => [
         a.objectNumber,

@@ -18,6 +18,15 @@ export const activatePlan = (deckId: number, planId: number, fit: PlanFit) => ap
 
 export const listCompartments = (vesselId: number, params: Partial<CompartmentsQuery>) =>
   api.get<Page<Compartment>>(`/vessels/${vesselId}/compartments`, params);
+/** Every compartment of a vessel, page after page (a vessel may have more than one page of them). */
+export async function listAllCompartments(vesselId: number): Promise<Compartment[]> {
+  const items: Compartment[] = [];
+  for (let page = 1; ; page++) {
+    const result = await listCompartments(vesselId, { page, pageSize: 100, sort: 'designation' });
+    items.push(...result.items);
+    if (items.length >= result.total || result.items.length === 0) return items;
+  }
+}
 export const getCompartment = (id: number) => api.get<Compartment>(`/compartments/${id}`);
 export const createCompartment = (vesselId: number, body: CreateCompartmentBody) => api.post<Compartment>(`/vessels/${vesselId}/compartments`, body);
 export const updateCompartment = (id: number, body: UpdateCompartmentBody) => api.patch<Compartment>(`/compartments/${id}`, body);

@@ -103,6 +103,7 @@ describe('CSV export', () => {
     expect(res.headers['content-disposition']).toMatch(/attachment; filename="artifacts-vessel-\d+-\d{4}-\d{2}-\d{2}\.csv"/);
     const lines = res.text.split('\r\n');
     expect(lines[0]).toBe('object_number,name,category,description,date_or_period,maker,materials,height,width,depth,dimension_unit,significance,status,compartment,deck');
+    expect(lines[1]).toMatch(/^2019\.1\.2,/);
     expect(res.text).toContain(`2019.1.2,"'=HYPERLINK(""x"")",electrical,"Line one\nline ""two"""`);
     expect(res.text).not.toContain('Already here');
 
