@@ -13,4 +13,10 @@ import 'leaflet/dist/leaflet.css';
  */
 export const planLatLng = (p: Point, maxZoom: number): L.LatLng => L.CRS.Simple.pointToLatLng(L.point(p[0], p[1]), maxZoom);
 
+/** The reverse of `planLatLng`: a position on the deck map as a plan point, to a tenth of a pixel. */
+export function planPoint(latlng: L.LatLng, maxZoom: number): Point {
+  const p = L.CRS.Simple.latLngToPoint(latlng, maxZoom);
+  return [Math.round(p.x * 10) / 10, Math.round(p.y * 10) / 10];
+}
+
 export default L;
