@@ -36,6 +36,25 @@ function snippetExpression(column: 'body'): string {
   return `snippet(${SEARCH_TABLE}, ${COLUMN_INDEX[column]}, '${HIGHLIGHT_START}', '${HIGHLIGHT_END}', '…', 16)`;
 }
 
+/** The marked title and snippet of a match, as two columns `hl_title` and `hl_snippet`. */
+export const HIGHLIGHT_COLUMNS = `${highlightExpression('title')} AS hl_title, ${snippetExpression('body')} AS hl_snippet`;
+
+export interface SearchHit {
+  id: number;
+  title: string;
+  snippet: string;
+}
+
+export interface RawHit {
+  id: number;
+  hl_title: string;
+  hl_snippet: string;
+}
+
+export function hitOf(row: RawHit): SearchHit {
+  return { id: Number(row.id), title: mergeHighlights(row.hl_title), snippet: mergeHighlights(row.hl_snippet) };
+}
+
 function scopeOf(kind: SearchKind, vesselId: number): string {
   return `${kind}${vesselId}`;
 }
@@ -95,26 +114,17 @@ export class SearchIndex {
   }
 
   /**
-   * Record ids of one page of matches of a scoped expression, best first (bm25), with `leading`
-   * (an exact identifier match) before all others. Used when nothing but the text narrows a list.
+   * One page of matches of a scoped expression, best first (bm25), with `leading` (an exact
+   * identifier match) before all others, each with its marked title and body snippet. Used when
+   * nothing but the text narrows a list. (SQLite marks only the rows of the page here; asking for
+   * marks of given rowids afterwards would run the whole match again.)
    */
-  async rankedIds(kind: SearchKind, scoped: string, leading: number | null, offset: number, limit: number): Promise<number[]> {
+  async ranked(kind: SearchKind, scoped: string, leading: number | null, offset: number, limit: number): Promise<SearchHit[]> {
     const rows = (await this.manager.query(
-      `SELECT record_id AS id FROM ${SEARCH_TABLE} WHERE ${SEARCH_TABLE} MATCH ? ORDER BY rowid = ? DESC, ${RANK_EXPRESSION}, rowid LIMIT ? OFFSET ?`,
+      `SELECT record_id AS id, ${HIGHLIGHT_COLUMNS} FROM ${SEARCH_TABLE} WHERE ${SEARCH_TABLE} MATCH ? ORDER BY rowid = ? DESC, ${RANK_EXPRESSION}, rowid LIMIT ? OFFSET ?`,
       [scoped, leading === null ? -1n : rowIdOf(kind, leading), limit, offset],
-    )) as { id: number }[];
-    return rows.map((row) => Number(row.id));
-  }
-
-  /** Highlighted title and a snippet of the body of the given records, for one page of results. */
-  async highlights(kind: SearchKind, ids: number[], scoped: string): Promise<Map<number, { title: string; snippet: string }>> {
-    if (ids.length === 0) return new Map();
-    const rowIds = ids.map((id) => rowIdOf(kind, id));
-    const rows = (await this.manager.query(
-      `SELECT record_id AS id, ${highlightExpression('title')} AS title, ${snippetExpression('body')} AS snippet FROM ${SEARCH_TABLE} WHERE ${SEARCH_TABLE} MATCH ? AND rowid IN (${rowIds.map(() => '?').join(', ')})`,
-      [scoped, ...rowIds],
-    )) as { id: number; title: string; snippet: string }[];
-    return new Map(rows.map((row) => [Number(row.id), { title: mergeHighlights(row.title), snippet: mergeHighlights(row.snippet) }]));
+    )) as RawHit[];
+    return rows.map(hitOf);
   }
 
   async remove(kind: SearchKind, recordId: number): Promise<void> {

@@ -1,7 +1,7 @@
 import { In, type EntityManager, type SelectQueryBuilder } from 'typeorm';
 import type { ARTIFACT_SORTS, ArtifactFilters, ArtifactsQuery } from '../../../shared/schemas/artifacts.js';
 import type { Page } from '../../../shared/schemas/common.js';
-import { RANK_EXPRESSION, SEARCH_TABLE, SearchIndex, matchExpression, scopedMatch } from '../../search/search-index.js';
+import { HIGHLIGHT_COLUMNS, RANK_EXPRESSION, SEARCH_TABLE, SearchIndex, hitOf, matchExpression, scopedMatch, type RawHit, type SearchHit } from '../../search/search-index.js';
 import type { Point } from '../../../shared/calc/geometry.js';
 import { ArtifactEntity } from '../entities/artifact.entity.js';
 
@@ -105,32 +105,31 @@ export class ArtifactRepository {
     const offset = (query.page - 1) * query.pageSize;
     const search = new SearchIndex(this.manager);
     const exact = (query.q ?? '').trim().toUpperCase();
-    let ids: number[];
+    let hits: SearchHit[];
     let total: number;
     if (match && sort === 'relevance' && !descending && !query.category && !query.status && !query.deckId && !query.compartmentId) {
       // Only the text narrows the list: the full-text index alone answers, without joining every match.
       total = await search.count(match);
       const exactHit = await this.findByNumber(vesselId, exact);
-      ids = await search.rankedIds('artifact', match, exactHit?.id ?? null, offset, query.pageSize);
+      hits = await search.ranked('artifact', match, exactHit?.id ?? null, offset, query.pageSize);
     } else {
       total = await qb.clone().getCount();
       qb.select('artifact.id', 'id');
       // An exact object number comes first whatever the order asked for.
-      if (match) qb.addSelect('CASE WHEN artifact.objectNumber = :exact THEN 0 ELSE 1 END', 'exact').setParameter('exact', exact).orderBy('exact', 'ASC');
-      ids = ArtifactRepository.idsOf(
-        await qb
-          .addOrderBy(SORT_COLUMNS[sort], direction)
-          .addOrderBy('artifact.id', 'ASC')
-          .offset(offset)
-          .limit(query.pageSize)
-          .getRawMany<{ id: number }>(),
-      );
+      if (match) qb.addSelect(HIGHLIGHT_COLUMNS).addSelect('CASE WHEN artifact.objectNumber = :exact THEN 0 ELSE 1 END', 'exact').setParameter('exact', exact).orderBy('exact', 'ASC');
+      const rows = await qb
+        .addOrderBy(SORT_COLUMNS[sort], direction)
+        .addOrderBy('artifact.id', 'ASC')
+        .offset(offset)
+        .limit(query.pageSize)
+        .getRawMany<RawHit>();
+      hits = match ? rows.map(hitOf) : rows.map((row) => ({ id: Number(row.id), title: '', snippet: '' }));
     }
-    const artifacts = await this.loadInOrder(ids);
-    const marks = match ? await search.highlights('artifact', ids, match) : null;
+    const artifacts = await this.loadInOrder(hits.map((hit) => hit.id));
+    const marks = new Map(hits.map((hit) => [hit.id, hit]));
     const items = artifacts.map((artifact) => {
-      const mark = marks?.get(artifact.id);
-      return { artifact, highlight: marks ? { name: mark?.title ?? artifact.name, snippet: mark?.snippet ?? '' } : null };
+      const mark = marks.get(artifact.id)!;
+      return { artifact, highlight: match ? { name: mark.title || artifact.name, snippet: mark.snippet } : null };
     });
     return { items, total, page: query.page, pageSize: query.pageSize };
   }
