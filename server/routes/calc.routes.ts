@@ -1,5 +1,7 @@
+import { abcRisk, bandRange, isHalfStepScore, scoreA, scoreB, scoreC } from '../../shared/calc/abc-risk.js';
 import { parseNavyDesignation } from '../../shared/calc/designation.js';
-import { designationQuery, designationResponse } from '../../shared/schemas/calc.js';
+import { rustGrade, rustGradeRange } from '../../shared/calc/rust-grade.js';
+import { abcRiskQuery, abcRiskResponse, designationQuery, designationResponse, rustGradeQuery, rustGradeResponse } from '../../shared/schemas/calc.js';
 import type { ApiRouter } from '../http/api-router.js';
 import { anyone } from '../http/access.js';
 import { UnprocessableError } from '../http/errors.js';
@@ -23,4 +25,55 @@ export function calcRoutes(api: ApiRouter) {
       return { scheme: query.scheme, ...result.designation, source: NAVY_SOURCE };
     },
   });
+
+  api.route({
+    method: 'get',
+    path: '/calc/rust-grade',
+    tag: 'Calculations',
+    summary: 'ASTM D610 rust grade of a painted steel surface from its percent rusted (0–100), with the range the grade covers',
+    access: anyone,
+    query: rustGradeQuery,
+    response: rustGradeResponse,
+    errors: [422],
+    handler: ({ query }) => {
+      const grade = within(() => rustGrade(query.percent, query.distribution), 'percent');
+      return { percent: query.percent, grade: grade.grade, label: grade.label, above: grade.above, upTo: grade.upTo, range: rustGradeRange(grade), source: grade.source };
+    },
+  });
+
+  api.route({
+    method: 'get',
+    path: '/calc/abc-risk',
+    tag: 'Calculations',
+    summary: 'ABC method magnitude of risk and priority band, from the scores A, B and C (1–5 in half steps) or from yearsBetween, lossPerItemPercent and assetFractionPercent',
+    access: anyone,
+    query: abcRiskQuery,
+    response: abcRiskResponse,
+    errors: [422],
+    handler: ({ query }) => {
+      const pick = (score: number | undefined, plain: number | undefined, toScore: (v: number) => number, name: string, plainName: string) => {
+        if (score !== undefined) return score;
+        if (plain === undefined) throw new UnprocessableError(`Give ${name} (1–5 in half steps) or ${plainName}.`, { [name]: 'Missing.' });
+        return within(() => toScore(plain), plainName);
+      };
+      const a = pick(query.a, query.yearsBetween, scoreA, 'a', 'yearsBetween');
+      const b = pick(query.b, query.lossPerItemPercent, scoreB, 'b', 'lossPerItemPercent');
+      const c = pick(query.c, query.assetFractionPercent, scoreC, 'c', 'assetFractionPercent');
+      for (const [name, score] of [['a', a], ['b', b], ['c', c]] as const) {
+        if (!isHalfStepScore(score)) throw new UnprocessableError(`${name.toUpperCase()} must be between 1 and 5 in steps of 0.5.`, { [name]: 'Between 1 and 5 in steps of 0.5.' });
+      }
+      const risk = abcRisk(a, b, c);
+      return { ...risk, bandRange: bandRange(risk.band) };
+    },
+  });
+}
+
+/** Runs a computation; a value off its scale answers 422 with the valid range. */
+function within<T>(compute: () => T, field: string): T {
+  try {
+    return compute();
+  } catch (err) {
+    if (err instanceof RangeError) throw new UnprocessableError(err.message, { [field]: err.message });
+    throw err;
+  }
 }

@@ -21,3 +21,49 @@ export const designationResponse = z
   })
   .meta({ id: 'Designation' });
 export type DesignationResponse = z.infer<typeof designationResponse>;
+
+const number = (label: string) => z.coerce.number({ error: `${label} must be a number.` }).refine(Number.isFinite, `${label} must be a number.`);
+
+export const rustGradeQuery = z.object({
+  percent: number('percent'),
+  distribution: z.enum(['S', 'G', 'P', 'H'], { error: 'Distribution is S (spot), G (general), P (pinpoint) or H (hybrid).' }).optional(),
+});
+
+export const rustGradeResponse = z
+  .object({
+    percent: z.number(),
+    grade: z.number().int(),
+    label: z.string(),
+    above: z.number().nullable(),
+    upTo: z.number().nullable(),
+    range: z.string(),
+    source: z.string(),
+  })
+  .meta({ id: 'RustGrade' });
+export type RustGradeResponse = z.infer<typeof rustGradeResponse>;
+
+/** Either the three scores, or the plain inputs they come from (any score may be given directly). */
+export const abcRiskQuery = z.object({
+  a: number('a').optional(),
+  b: number('b').optional(),
+  c: number('c').optional(),
+  yearsBetween: number('yearsBetween').optional(),
+  lossPerItemPercent: number('lossPerItemPercent').optional(),
+  assetFractionPercent: number('assetFractionPercent').optional(),
+});
+export type AbcRiskQuery = z.infer<typeof abcRiskQuery>;
+
+export const abcRiskResponse = z
+  .object({
+    a: z.number(),
+    b: z.number(),
+    c: z.number(),
+    magnitude: z.number(),
+    band: z.enum(['extreme', 'very-high', 'high', 'medium', 'low']),
+    label: z.string(),
+    meaning: z.string(),
+    bandRange: z.string(),
+    source: z.string(),
+  })
+  .meta({ id: 'AbcRisk' });
+export type AbcRiskResponse = z.infer<typeof abcRiskResponse>;
