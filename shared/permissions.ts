@@ -22,6 +22,8 @@ export const PERMISSIONS = {
   hazard: { read: STAFF, create: CONSERVATOR, update: CONSERVATOR, delete: CONSERVATOR },
   artifact: { read: STAFF, create: CURATOR, update: CURATOR, move: CURATOR, archive: CURATOR, import: CURATOR },
   /** Files on a record; the service also asks for the right to change the record they belong to. */
+  /** Every staff role reads summaries; findings and details are for the people who care for the ship. */
+  conditionReport: { read: STAFF, readFindings: ['admin', 'curator', 'conservator'], create: CONSERVATOR, update: CONSERVATOR, delete: CONSERVATOR, submit: ['conservator', 'curator'], amend: CONSERVATOR },
   media: { read: STAFF, create: ['curator', 'conservator'], update: ['curator', 'conservator'], delete: ['curator', 'conservator'] },
 } as const satisfies Record<string, Record<string, readonly Role[]>>;
 

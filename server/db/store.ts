@@ -1,6 +1,7 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { ArtifactMoveRepository } from './repositories/artifact-move.repository.js';
 import { ArtifactRepository } from './repositories/artifact.repository.js';
+import { ConditionReportRepository } from './repositories/condition-report.repository.js';
 import { AuditEventRepository } from './repositories/audit-event.repository.js';
 import { CompartmentRepository } from './repositories/compartment.repository.js';
 import { DeckRepository } from './repositories/deck.repository.js';
@@ -30,6 +31,7 @@ export interface Repositories {
   artifactMoves: ArtifactMoveRepository;
   media: MediaRepository;
   search: SearchIndex;
+  conditionReports: ConditionReportRepository;
 }
 
 function repositories(manager: EntityManager): Repositories {
@@ -48,6 +50,7 @@ function repositories(manager: EntityManager): Repositories {
     artifactMoves: new ArtifactMoveRepository(manager),
     media: new MediaRepository(manager),
     search: new SearchIndex(manager),
+    conditionReports: new ConditionReportRepository(manager),
   };
 }
 

@@ -8,7 +8,7 @@ import { HIGHLIGHT_END, HIGHLIGHT_START } from '../../shared/schemas/artifacts.j
  * A document's kind and vessel are also one indexed token (`scope`), so that narrowing a search to
  * them is a lookup in the index rather than a read of every matching row.
  */
-export const SEARCH_KINDS = ['artifact'] as const;
+export const SEARCH_KINDS = ['artifact', 'condition-report'] as const;
 export type SearchKind = (typeof SEARCH_KINDS)[number];
 
 export const SEARCH_TABLE = 'search_documents';

@@ -16,3 +16,4 @@ export * from './plans.js';
 export * from './artifacts.js';
 export * from './media.js';
 export * from './artifact-import.js';
+export * from './condition.js';

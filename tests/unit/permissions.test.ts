@@ -40,6 +40,14 @@ const MATRIX: Record<string, Record<Role, boolean>> = {
   'artifact.move': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
   'artifact.archive': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
   'artifact.import': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
+  // Condition: conservators write, curators read everything and may submit, others read summaries.
+  'conditionReport.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
+  'conditionReport.readFindings': { admin: true, curator: true, conservator: true, docent: false, fundraiser: false },
+  'conditionReport.create': { admin: false, curator: false, conservator: true, docent: false, fundraiser: false },
+  'conditionReport.update': { admin: false, curator: false, conservator: true, docent: false, fundraiser: false },
+  'conditionReport.delete': { admin: false, curator: false, conservator: true, docent: false, fundraiser: false },
+  'conditionReport.submit': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
+  'conditionReport.amend': { admin: false, curator: false, conservator: true, docent: false, fundraiser: false },
   // Files: curators and conservators, further limited to records their role may change (media.presenter.ts).
   'media.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
   'media.create': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },

@@ -1,5 +1,7 @@
 import { ArtifactMoveEntity } from './artifact-move.entity.js';
 import { ArtifactEntity } from './artifact.entity.js';
+import { ConditionFindingEntity } from './condition-finding.entity.js';
+import { ConditionReportEntity } from './condition-report.entity.js';
 import { AuditEventEntity } from './audit-event.entity.js';
 import { CompartmentEntity } from './compartment.entity.js';
 import { DeckEntity } from './deck.entity.js';
@@ -13,6 +15,6 @@ import { SessionEntity } from './session.entity.js';
 import { UserEntity } from './user.entity.js';
 import { VesselEntity } from './vessel.entity.js';
 
-export { ArtifactEntity, ArtifactMoveEntity, MediaEntity, AuditEventEntity, CompartmentEntity, DeckEntity, HazardEntity, InvitationEntity, OrganisationSettingsEntity, PasswordResetEntity, PlanEntity, SessionEntity, UserEntity, VesselEntity };
+export { ConditionReportEntity, ConditionFindingEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, AuditEventEntity, CompartmentEntity, DeckEntity, HazardEntity, InvitationEntity, OrganisationSettingsEntity, PasswordResetEntity, PlanEntity, SessionEntity, UserEntity, VesselEntity };
 
-export const entities = [UserEntity, VesselEntity, OrganisationSettingsEntity, AuditEventEntity, SessionEntity, InvitationEntity, PasswordResetEntity, DeckEntity, CompartmentEntity, HazardEntity, PlanEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity];
+export const entities = [UserEntity, VesselEntity, OrganisationSettingsEntity, AuditEventEntity, SessionEntity, InvitationEntity, PasswordResetEntity, DeckEntity, CompartmentEntity, HazardEntity, PlanEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, ConditionReportEntity, ConditionFindingEntity];

@@ -2,6 +2,7 @@ import { Foundation1796204951114 } from './1796204951114-Foundation.js';
 import { ShipMap1796208163044 } from './1796208163044-ShipMap.js';
 import { DeckPlans1796208850383 } from './1796208850383-DeckPlans.js';
 import { Collection1796215405776 } from './1796215405776-Collection.js';
+import { ConditionReports1796217167359 } from './1796217167359-ConditionReports.js';
 
 /** Every migration, oldest first; run at start by openDatabase(). */
-export const migrations = [Foundation1796204951114, ShipMap1796208163044, DeckPlans1796208850383, Collection1796215405776];
+export const migrations = [Foundation1796204951114, ShipMap1796208163044, DeckPlans1796208850383, Collection1796215405776, ConditionReports1796217167359];

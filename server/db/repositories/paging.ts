@@ -8,11 +8,11 @@ export interface PageRequest {
 }
 
 /** Applies `sort` (`field` or `-field`, already validated against a list) and paging, and counts. */
-export async function pageOf<T extends ObjectLiteral>(qb: SelectQueryBuilder<T>, request: PageRequest, tieBreaker = 'id'): Promise<Page<T>> {
+export async function pageOf<T extends ObjectLiteral>(qb: SelectQueryBuilder<T>, request: PageRequest, tieBreaker = 'id', tieDirection: 'ASC' | 'DESC' = 'ASC'): Promise<Page<T>> {
   const descending = request.sort.startsWith('-');
   const field = descending ? request.sort.slice(1) : request.sort;
   const alias = qb.alias;
-  qb.orderBy(`${alias}.${field}`, descending ? 'DESC' : 'ASC').addOrderBy(`${alias}.${tieBreaker}`, 'ASC');
+  qb.orderBy(`${alias}.${field}`, descending ? 'DESC' : 'ASC').addOrderBy(`${alias}.${tieBreaker}`, tieDirection);
   qb.skip((request.page - 1) * request.pageSize).take(request.pageSize);
   const [items, total] = await qb.getManyAndCount();
   return { items, total, page: request.page, pageSize: request.pageSize };

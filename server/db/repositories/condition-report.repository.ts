@@ -1,0 +1,81 @@
+import { In, type EntityManager } from 'typeorm';
+import type { ConditionReportsQuery } from '../../../shared/schemas/condition.js';
+import { SEARCH_TABLE, matchExpression, scopedMatch } from '../../search/search-index.js';
+import { ConditionFindingEntity } from '../entities/condition-finding.entity.js';
+import { ConditionReportEntity } from '../entities/condition-report.entity.js';
+import { pageOf } from './paging.js';
+
+export class ConditionReportRepository {
+  constructor(private readonly manager: EntityManager) {}
+
+  private get repo() {
+    return this.manager.getRepository(ConditionReportEntity);
+  }
+
+  private get findingsRepo() {
+    return this.manager.getRepository(ConditionFindingEntity);
+  }
+
+  findById(id: number) {
+    return this.repo.findOne({ where: { id }, relations: { surveyor: true } });
+  }
+
+  /** The draft that amends a report, if one is open. */
+  amendmentOf(id: number) {
+    return this.repo.findOneBy({ supersedesId: id });
+  }
+
+  async page(query: ConditionReportsQuery) {
+    const qb = this.repo.createQueryBuilder('report').leftJoinAndSelect('report.surveyor', 'surveyor');
+    if (query.vesselId) qb.andWhere('report.vesselId = :vesselId', { vesselId: query.vesselId });
+    if (query.subjectType) qb.andWhere('report.subjectType = :subjectType', { subjectType: query.subjectType });
+    if (query.subjectId) qb.andWhere('report.subjectId = :subjectId', { subjectId: query.subjectId });
+    if (query.status) qb.andWhere('report.status = :status', { status: query.status });
+    if (query.grade) qb.andWhere('report.grade = :grade', { grade: query.grade });
+    const words = query.q ? matchExpression(query.q) : null;
+    if (query.q && !words) qb.andWhere('1 = 0');
+    if (words) {
+      if (!query.vesselId) qb.andWhere('1 = 0'); // searching is per vessel, as its index is
+      else qb.innerJoin(SEARCH_TABLE, SEARCH_TABLE, `${SEARCH_TABLE}.record_id = report.id AND ${SEARCH_TABLE}.kind = 'condition-report'`).andWhere(`${SEARCH_TABLE} MATCH :match`, { match: scopedMatch('condition-report', query.vesselId, words) });
+    }
+    // On the same date, the latest revision first.
+    return pageOf(qb, query, 'id', 'DESC');
+  }
+
+  create(fields: Partial<ConditionReportEntity>) {
+    return this.repo.save(this.repo.create(fields));
+  }
+
+  save(report: ConditionReportEntity) {
+    return this.repo.save(report);
+  }
+
+  async remove(id: number) {
+    await this.findingsRepo.delete({ reportId: id });
+    await this.repo.delete({ id });
+  }
+
+  findings(reportId: number) {
+    return this.findingsRepo.find({ where: { reportId }, relations: { artifact: true }, order: { position: 'ASC', id: 'ASC' } });
+  }
+
+  findingsOf(reportIds: number[]) {
+    return reportIds.length ? this.findingsRepo.find({ where: { reportId: In(reportIds) }, order: { position: 'ASC', id: 'ASC' } }) : Promise.resolve([]);
+  }
+
+  findFinding(id: number) {
+    return this.findingsRepo.findOne({ where: { id }, relations: { artifact: true } });
+  }
+
+  createFinding(fields: Partial<ConditionFindingEntity>) {
+    return this.findingsRepo.save(this.findingsRepo.create(fields));
+  }
+
+  saveFinding(finding: ConditionFindingEntity) {
+    return this.findingsRepo.save(finding);
+  }
+
+  async removeFinding(id: number) {
+    await this.findingsRepo.delete({ id });
+  }
+}

@@ -1,0 +1,73 @@
+import { gradeFromFindings } from '../../shared/calc/condition-grade.js';
+import { can } from '../../shared/permissions.js';
+import type { ConditionReport, ConditionReportSummary, Finding } from '../../shared/schemas/condition.js';
+import type { ConditionFindingEntity } from '../db/entities/condition-finding.entity.js';
+import type { ConditionReportEntity } from '../db/entities/condition-report.entity.js';
+
+export function presentFinding(finding: ConditionFindingEntity): Finding {
+  return {
+    id: finding.id,
+    reportId: finding.reportId,
+    artifactId: finding.artifactId,
+    artifactLabel: finding.artifact ? `${finding.artifact.objectNumber} ${finding.artifact.name}` : null,
+    agent: finding.agent,
+    damageType: finding.damageType,
+    location: finding.location,
+    extentPercent: finding.extentPercent,
+    severity: finding.severity,
+    percentRusted: finding.percentRusted,
+    rustDistribution: finding.rustDistribution,
+    rustGrade: finding.rustGrade,
+    description: finding.description,
+    recommendedAction: finding.recommendedAction,
+    urgency: finding.urgency,
+    position: finding.position,
+    version: finding.version,
+  };
+}
+
+export function presentReportSummary(report: ConditionReportEntity, subjectLabel: string, supersededById: number | null): ConditionReportSummary {
+  return {
+    id: report.id,
+    vesselId: report.vesselId,
+    subjectType: report.subjectType,
+    subjectId: report.subjectId,
+    subjectLabel,
+    revision: report.revision,
+    supersedesId: report.supersedesId,
+    supersededById,
+    status: report.status,
+    inspectedOn: report.inspectedOn,
+    surveyor: report.surveyor ? { id: report.surveyor.id, name: report.surveyor.name } : null,
+    method: report.method,
+    summary: report.summary,
+    grade: report.grade,
+    findingCount: report.findingCount,
+    submittedAt: report.submittedAt?.toISOString() ?? null,
+    signedBy: report.signedBy,
+    updatedAt: report.updatedAt.toISOString(),
+  };
+}
+
+export function presentReport(report: ConditionReportEntity, subjectLabel: string, supersededById: number | null, findings: ConditionFindingEntity[], hasAmendment: boolean, viewer: Express.User): ConditionReport {
+  const draft = report.status === 'draft';
+  const readFindings = can(viewer.role, 'conditionReport', 'readFindings');
+  return {
+    ...presentReportSummary(report, subjectLabel, supersededById),
+    temperatureC: report.temperatureC,
+    relativeHumidity: report.relativeHumidity,
+    computedGrade: report.computedGrade,
+    gradeBecause: gradeFromFindings(findings).because,
+    gradeOverride: report.gradeOverride,
+    overrideReason: readFindings ? report.overrideReason : null,
+    findings: readFindings ? findings.map(presentFinding) : null,
+    version: report.version,
+    abilities: {
+      update: draft && can(viewer.role, 'conditionReport', 'update'),
+      submit: draft && can(viewer.role, 'conditionReport', 'submit'),
+      amend: !draft && supersededById === null && !hasAmendment && can(viewer.role, 'conditionReport', 'amend'),
+      delete: draft && can(viewer.role, 'conditionReport', 'delete'),
+      readFindings,
+    },
+  };
+}

@@ -1,0 +1,136 @@
+import { idParam } from '../../shared/schemas/common.js';
+import { conditionReport, conditionReportPage, conditionReportsQuery, createConditionReportBody, createFindingBody, reportFindingParams, updateConditionReportBody, updateFindingBody, versionBody } from '../../shared/schemas/condition.js';
+import type { ApiRouter } from '../http/api-router.js';
+import { allowed } from '../http/access.js';
+import { actorOf } from '../services/audit.service.js';
+import type { ConditionReportService } from '../services/condition-report.service.js';
+
+export function conditionReportRoutes(api: ApiRouter, reports: ConditionReportService) {
+  const tag = 'Condition';
+
+  api.route({
+    method: 'get',
+    path: '/condition-reports',
+    tag,
+    summary: 'Condition reports (summaries) by vessel, artifact or compartment; `q` searches a vessel’s reports and findings',
+    access: allowed('conditionReport', 'read'),
+    query: conditionReportsQuery,
+    response: conditionReportPage,
+    handler: ({ query }) => reports.list(query),
+  });
+
+  api.route({
+    method: 'post',
+    path: '/condition-reports',
+    tag,
+    summary: 'Start a condition report (a draft) on an artifact or a compartment',
+    access: allowed('conditionReport', 'create'),
+    body: createConditionReportBody,
+    status: 201,
+    response: conditionReport,
+    errors: [422],
+    handler: ({ req, body }) => reports.create(body, req.user!, actorOf(req)),
+  });
+
+  api.route({
+    method: 'get',
+    path: '/condition-reports/:id',
+    tag,
+    summary: 'One condition report; its findings for the roles that read them',
+    access: allowed('conditionReport', 'read'),
+    params: idParam,
+    response: conditionReport,
+    errors: [404],
+    handler: ({ req, params }) => reports.get(params.id, req.user!),
+  });
+
+  api.route({
+    method: 'patch',
+    path: '/condition-reports/:id',
+    tag,
+    summary: 'Change a draft report (a submitted one answers 409: amend it)',
+    access: allowed('conditionReport', 'update'),
+    params: idParam,
+    body: updateConditionReportBody,
+    response: conditionReport,
+    errors: [404, 409, 422],
+    handler: ({ req, params, body }) => reports.update(params.id, body, req.user!, actorOf(req)),
+  });
+
+  api.route({
+    method: 'delete',
+    path: '/condition-reports/:id',
+    tag,
+    summary: 'Delete a draft report; a submitted report is never deleted (409)',
+    access: allowed('conditionReport', 'delete'),
+    params: idParam,
+    status: 204,
+    errors: [404, 409],
+    handler: ({ req, params }) => reports.remove(params.id, actorOf(req)),
+  });
+
+  api.route({
+    method: 'post',
+    path: '/condition-reports/:id/submit',
+    tag,
+    summary: 'Submit a draft: signed with the name of who submits and the time; from then on immutable',
+    access: allowed('conditionReport', 'submit'),
+    params: idParam,
+    body: versionBody,
+    response: conditionReport,
+    errors: [404, 409],
+    handler: ({ req, params, body }) => reports.submit(params.id, body.version, req.user!, actorOf(req)),
+  });
+
+  api.route({
+    method: 'post',
+    path: '/condition-reports/:id/amend',
+    tag,
+    summary: 'Amend a submitted report: a new draft revision, with its findings, that supersedes it once submitted',
+    access: allowed('conditionReport', 'amend'),
+    params: idParam,
+    status: 201,
+    response: conditionReport,
+    errors: [404, 409],
+    handler: ({ req, params }) => reports.amend(params.id, req.user!, actorOf(req)),
+  });
+
+  api.route({
+    method: 'post',
+    path: '/condition-reports/:id/findings',
+    tag,
+    summary: 'Add a finding to a draft report; answers the report with its new grade',
+    access: allowed('conditionReport', 'update'),
+    params: idParam,
+    body: createFindingBody,
+    status: 201,
+    response: conditionReport,
+    errors: [404, 409, 422],
+    handler: ({ req, params, body }) => reports.addFinding(params.id, body, req.user!, actorOf(req)),
+  });
+
+  api.route({
+    method: 'patch',
+    path: '/condition-reports/:id/findings/:findingId',
+    tag,
+    summary: 'Change a finding of a draft report',
+    access: allowed('conditionReport', 'update'),
+    params: reportFindingParams,
+    body: updateFindingBody,
+    response: conditionReport,
+    errors: [404, 409, 422],
+    handler: ({ req, params, body }) => reports.updateFinding(params.id, params.findingId, body, req.user!, actorOf(req)),
+  });
+
+  api.route({
+    method: 'delete',
+    path: '/condition-reports/:id/findings/:findingId',
+    tag,
+    summary: 'Remove a finding from a draft report',
+    access: allowed('conditionReport', 'update'),
+    params: reportFindingParams,
+    response: conditionReport,
+    errors: [404, 409],
+    handler: ({ req, params }) => reports.removeFinding(params.id, params.findingId, req.user!, actorOf(req)),
+  });
+}

@@ -1,0 +1,277 @@
+import { gradeFromFindings } from '../../shared/calc/condition-grade.js';
+import { rustGrade } from '../../shared/calc/rust-grade.js';
+import { AGENT_LABELS, DAMAGE_TYPES, RUST_DAMAGE_TYPES, type ConditionReportsQuery, type UpdateConditionReportBody, type UpdateFindingBody, type createConditionReportBody, type createFindingBody } from '../../shared/schemas/condition.js';
+import type { z } from 'zod';
+import type { ConditionFindingEntity } from '../db/entities/condition-finding.entity.js';
+import type { ConditionReportEntity } from '../db/entities/condition-report.entity.js';
+import type { Repositories, Store } from '../db/store.js';
+import { ConflictError, NotFoundError, UnprocessableError } from '../http/errors.js';
+import { presentReport, presentReportSummary } from '../presenters/condition-report.presenter.js';
+import type { SearchDocument } from '../search/search-index.js';
+import { changesBetween, recordAudit, type Actor } from './audit.service.js';
+import { staleEditError } from './stale-edit.js';
+
+const REPORT_FIELDS: (keyof ConditionReportEntity)[] = ['inspectedOn', 'method', 'temperatureC', 'relativeHumidity', 'summary', 'gradeOverride', 'overrideReason'];
+const FINDING_FIELDS: (keyof ConditionFindingEntity)[] = ['artifactId', 'agent', 'damageType', 'location', 'extentPercent', 'severity', 'percentRusted', 'rustDistribution', 'description', 'recommendedAction', 'urgency'];
+
+interface Subject {
+  vesselId: number;
+  label: string;
+}
+
+const SUBMITTED = 'This report is submitted and signed, so it no longer changes. Amend it: that makes a new revision which links to this one.';
+
+/**
+ * Condition reports and their findings. A draft changes freely; submitting signs it and from then
+ * on it is immutable; an amendment is a new draft revision that supersedes it once submitted.
+ * Every change of a report (its findings included) is one audit event on the report, which the
+ * 409 for a stale save reads to say what changed.
+ */
+export class ConditionReportService {
+  constructor(private readonly store: Store) {}
+
+  private async subjectOf(repos: Repositories, type: 'artifact' | 'compartment', id: number): Promise<Subject> {
+    if (type === 'artifact') {
+      const artifact = await repos.artifacts.findById(id);
+      if (!artifact) throw new UnprocessableError('Choose an artifact of the collection.', { subjectId: 'No such artifact.' });
+      return { vesselId: artifact.vesselId, label: `${artifact.objectNumber} ${artifact.name}` };
+    }
+    const compartment = await repos.compartments.findById(id);
+    if (!compartment) throw new UnprocessableError('Choose a compartment of the ship.', { subjectId: 'No such compartment.' });
+    return { vesselId: compartment.vesselId, label: `${compartment.designation} ${compartment.name}` };
+  }
+
+  private async supersededBy(repos: Repositories, id: number): Promise<number | null> {
+    const next = await repos.conditionReports.amendmentOf(id);
+    return next?.status === 'submitted' ? next.id : null;
+  }
+
+  private async present(id: number, viewer: Express.User) {
+    const repos = this.store.repos;
+    const report = await repos.conditionReports.findById(id);
+    if (!report) throw new NotFoundError('The condition report');
+    const [subject, findings, amendment] = [await this.subjectOf(repos, report.subjectType, report.subjectId), await repos.conditionReports.findings(id), await repos.conditionReports.amendmentOf(id)];
+    return presentReport(report, subject.label, amendment?.status === 'submitted' ? amendment.id : null, findings, amendment !== null, viewer);
+  }
+
+  private searchDocument(report: ConditionReportEntity, subject: Subject, findings: ConditionFindingEntity[]): SearchDocument {
+    return {
+      kind: 'condition-report',
+      recordId: report.id,
+      vesselId: report.vesselId,
+      number: `CR-${report.id}`,
+      title: `${subject.label}, ${report.inspectedOn}`,
+      body: [report.summary, ...findings.flatMap((f) => [DAMAGE_TYPES[f.damageType].label, f.description, f.recommendedAction])].filter(Boolean).join('\n'),
+      extra: [...new Set(findings.map((f) => AGENT_LABELS[f.agent]))].join(' · '),
+    };
+  }
+
+  /** Recomputes the grade and counts from the findings, saves the report and its search document. */
+  private async refresh(repos: Repositories, report: ConditionReportEntity) {
+    const findings = await repos.conditionReports.findings(report.id);
+    report.computedGrade = gradeFromFindings(findings).grade;
+    report.grade = report.gradeOverride ?? report.computedGrade;
+    report.findingCount = findings.length;
+    const saved = await repos.conditionReports.save(report);
+    await repos.search.put(this.searchDocument(saved, await this.subjectOf(repos, saved.subjectType, saved.subjectId), findings));
+    return saved;
+  }
+
+  private async draftForChange(repos: Repositories, id: number, version: number | null) {
+    const report = await repos.conditionReports.findById(id);
+    if (!report) throw new NotFoundError('The condition report');
+    if (report.status !== 'draft') throw new ConflictError(SUBMITTED, { status: 'submitted' });
+    if (version !== null && report.version !== version) throw await staleEditError(repos, 'condition-report', id, 'this report', report.version, version);
+    return report;
+  }
+
+  async list(query: ConditionReportsQuery) {
+    const repos = this.store.repos;
+    const page = await repos.conditionReports.page(query);
+    const items = [];
+    for (const report of page.items) items.push(presentReportSummary(report, (await this.subjectOf(repos, report.subjectType, report.subjectId)).label, await this.supersededBy(repos, report.id)));
+    return { ...page, items };
+  }
+
+  get(id: number, viewer: Express.User) {
+    return this.present(id, viewer);
+  }
+
+  async create(body: z.output<typeof createConditionReportBody>, viewer: Express.User, actor: Actor) {
+    const report = await this.store.transaction(async (repos) => {
+      const subject = await this.subjectOf(repos, body.subjectType, body.subjectId);
+      const created = await repos.conditionReports.create({ ...body, vesselId: subject.vesselId, surveyorId: viewer.id, status: 'draft', revision: 1 });
+      const saved = await this.refresh(repos, created);
+      await recordAudit(repos, actor, { action: 'create', entityType: 'condition-report', entityId: saved.id, vesselId: saved.vesselId, summary: `Condition report on ${subject.label} started (${body.inspectedOn})` });
+      return saved;
+    });
+    return this.present(report.id, viewer);
+  }
+
+  async update(id: number, body: UpdateConditionReportBody, viewer: Express.User, actor: Actor) {
+    await this.store.transaction(async (repos) => {
+      const report = await this.draftForChange(repos, id, body.version);
+      const { version: _version, ...fields } = body;
+      const next = { ...report, ...fields };
+      if (next.gradeOverride && !next.overrideReason?.trim()) {
+        throw new UnprocessableError('Say why the grade differs from the one the rule gives.', { overrideReason: 'A reason is needed to override the grade.' });
+      }
+      if (!next.gradeOverride) fields.overrideReason = null;
+      const changes = changesBetween(report, fields, REPORT_FIELDS);
+      if (!changes) return;
+      Object.assign(report, fields);
+      await this.refresh(repos, report);
+      await recordAudit(repos, actor, { action: 'update', entityType: 'condition-report', entityId: id, vesselId: report.vesselId, summary: `Condition report ${id} changed (${Object.keys(changes).join(', ')})`, changes });
+    });
+    return this.present(id, viewer);
+  }
+
+  async remove(id: number, actor: Actor) {
+    await this.store.transaction(async (repos) => {
+      const report = await this.draftForChange(repos, id, null);
+      await repos.search.remove('condition-report', id);
+      await repos.conditionReports.remove(id);
+      await recordAudit(repos, actor, { action: 'delete', entityType: 'condition-report', entityId: id, vesselId: report.vesselId, summary: `Draft condition report ${id} deleted` });
+    });
+  }
+
+  async submit(id: number, version: number, viewer: Express.User, actor: Actor) {
+    await this.store.transaction(async (repos) => {
+      const report = await this.draftForChange(repos, id, version);
+      if (report.supersedesId) {
+        const previous = await repos.conditionReports.findById(report.supersedesId);
+        if (previous?.status !== 'submitted') throw new ConflictError('The report this one amends is not submitted.');
+      }
+      report.status = 'submitted';
+      report.submittedAt = new Date();
+      report.signedBy = viewer.name;
+      await this.refresh(repos, report);
+      await recordAudit(repos, actor, {
+        action: 'submit',
+        entityType: 'condition-report',
+        entityId: id,
+        vesselId: report.vesselId,
+        summary: `Condition report ${id} submitted and signed by ${viewer.name}${report.supersedesId ? `, superseding report ${report.supersedesId}` : ''}`,
+        changes: { status: { from: 'draft', to: 'submitted' } },
+      });
+    });
+    return this.present(id, viewer);
+  }
+
+  /** A new draft revision with the same fields and findings, linked to the submitted report it will supersede. */
+  async amend(id: number, viewer: Express.User, actor: Actor) {
+    const created = await this.store.transaction(async (repos) => {
+      const report = await repos.conditionReports.findById(id);
+      if (!report) throw new NotFoundError('The condition report');
+      if (report.status !== 'submitted') throw new ConflictError('A draft is changed directly; only a submitted report is amended.');
+      const existing = await repos.conditionReports.amendmentOf(id);
+      if (existing) throw new ConflictError(`This report is already amended by report ${existing.id}${existing.status === 'draft' ? ' (a draft)' : ''}.`, { amendment: String(existing.id) });
+      const copy = await repos.conditionReports.create({
+        vesselId: report.vesselId,
+        subjectType: report.subjectType,
+        subjectId: report.subjectId,
+        revision: report.revision + 1,
+        supersedesId: report.id,
+        status: 'draft',
+        inspectedOn: report.inspectedOn,
+        surveyorId: viewer.id,
+        method: report.method,
+        temperatureC: report.temperatureC,
+        relativeHumidity: report.relativeHumidity,
+        summary: report.summary,
+        gradeOverride: report.gradeOverride,
+        overrideReason: report.overrideReason,
+      });
+      for (const finding of await repos.conditionReports.findings(id)) {
+        const { id: _id, report: _r, artifact: _a, createdAt: _c, updatedAt: _u, version: _v, ...fields } = finding;
+        await repos.conditionReports.createFinding({ ...fields, reportId: copy.id });
+      }
+      const saved = await this.refresh(repos, copy);
+      await recordAudit(repos, actor, { action: 'amend', entityType: 'condition-report', entityId: saved.id, vesselId: saved.vesselId, summary: `Condition report ${id} amended: revision ${saved.revision} is report ${saved.id} (a draft)` });
+      return saved;
+    });
+    return this.present(created.id, viewer);
+  }
+
+  /** Checks a finding against its report: scope, agent and damage type, rust inputs, location. */
+  private async checkFinding(repos: Repositories, report: ConditionReportEntity, f: Pick<ConditionFindingEntity, 'artifactId' | 'agent' | 'damageType' | 'percentRusted' | 'rustDistribution' | 'location'>) {
+    if (f.artifactId !== null) {
+      const artifact = await repos.artifacts.findById(f.artifactId);
+      const inScope = artifact && (report.subjectType === 'artifact' ? artifact.id === report.subjectId : artifact.compartmentId === report.subjectId);
+      if (!inScope) {
+        const scope = report.subjectType === 'artifact' ? 'the artifact this report is on' : 'an artifact in the surveyed compartment';
+        throw new UnprocessableError(`A finding may concern only ${scope}.`, { artifactId: 'Not in the scope of this report.' });
+      }
+    }
+    if (!(DAMAGE_TYPES[f.damageType].agents as readonly string[]).includes(f.agent)) {
+      throw new UnprocessableError(`${DAMAGE_TYPES[f.damageType].label} does not come from ${AGENT_LABELS[f.agent].toLowerCase()} in our list.`, { damageType: 'Not a damage of this agent.' });
+    }
+    const rusty = RUST_DAMAGE_TYPES.includes(f.damageType);
+    if (!rusty && (f.percentRusted !== null || f.rustDistribution !== null)) {
+      throw new UnprocessableError('Percent rusted and its distribution are given for coating failure only.', { percentRusted: 'Only for coating failure.' });
+    }
+    if (f.location?.on === 'photo') {
+      const media = await repos.media.findById(f.location.mediaId);
+      if (!media || media.kind !== 'photo' || media.ownerType !== report.subjectType || media.ownerId !== report.subjectId) {
+        throw new UnprocessableError('Mark the finding on a photo of what this report surveys.', { location: 'Not a photo of this subject.' });
+      }
+    }
+    if (f.location?.on === 'plan') {
+      const compartmentId = report.subjectType === 'compartment' ? report.subjectId : (await repos.artifacts.findById(report.subjectId))?.compartmentId;
+      const deck = compartmentId ? (await repos.compartments.findById(compartmentId))?.deck : null;
+      const [x, y] = f.location.point;
+      if (!deck?.planWidth || !deck.planHeight || x < 0 || y < 0 || x > deck.planWidth || y > deck.planHeight) {
+        throw new UnprocessableError('The point is not on the deck plan of what this report surveys.', { location: 'Off the plan.' });
+      }
+    }
+  }
+
+  private static withRust<T extends Pick<ConditionFindingEntity, 'percentRusted' | 'rustDistribution'>>(f: T): T & { rustGrade: string | null } {
+    return { ...f, rustGrade: f.percentRusted === null ? null : rustGrade(f.percentRusted, f.rustDistribution).label };
+  }
+
+  async addFinding(reportId: number, body: z.output<typeof createFindingBody>, viewer: Express.User, actor: Actor) {
+    await this.store.transaction(async (repos) => {
+      const report = await this.draftForChange(repos, reportId, null);
+      const fields = { ...body, artifactId: body.artifactId ?? (report.subjectType === 'artifact' ? report.subjectId : null) };
+      await this.checkFinding(repos, report, fields);
+      const position = (await repos.conditionReports.findings(reportId)).length;
+      await repos.conditionReports.createFinding({ ...ConditionReportService.withRust(fields), reportId, position });
+      await this.refresh(repos, report);
+      await recordAudit(repos, actor, { action: 'update', entityType: 'condition-report', entityId: reportId, vesselId: report.vesselId, summary: `Finding added to condition report ${reportId}: ${DAMAGE_TYPES[body.damageType].label}, ${body.severity}`, changes: { findings: { from: position, to: position + 1 } } });
+    });
+    return this.present(reportId, viewer);
+  }
+
+  async updateFinding(reportId: number, findingId: number, body: UpdateFindingBody, viewer: Express.User, actor: Actor) {
+    await this.store.transaction(async (repos) => {
+      const report = await this.draftForChange(repos, reportId, null);
+      const finding = await repos.conditionReports.findFinding(findingId);
+      if (!finding || finding.reportId !== reportId) throw new NotFoundError('The finding');
+      if (finding.version !== body.version) throw new ConflictError('Someone else changed this finding since you opened it. Reload to see their changes; yours are not saved.', { version: `current version is ${finding.version}` });
+      const { version: _version, ...fields } = body;
+      const next = ConditionReportService.withRust({ ...finding, ...fields });
+      await this.checkFinding(repos, report, next);
+      const changes = changesBetween(finding, next, [...FINDING_FIELDS, 'rustGrade']);
+      if (!changes) return;
+      Object.assign(finding, next);
+      finding.artifact = undefined as never;
+      await repos.conditionReports.saveFinding(finding);
+      await this.refresh(repos, report);
+      await recordAudit(repos, actor, { action: 'update', entityType: 'condition-report', entityId: reportId, vesselId: report.vesselId, summary: `Finding ${findingId} of condition report ${reportId} changed (${Object.keys(changes).join(', ')})`, changes });
+    });
+    return this.present(reportId, viewer);
+  }
+
+  async removeFinding(reportId: number, findingId: number, viewer: Express.User, actor: Actor) {
+    await this.store.transaction(async (repos) => {
+      const report = await this.draftForChange(repos, reportId, null);
+      const finding = await repos.conditionReports.findFinding(findingId);
+      if (!finding || finding.reportId !== reportId) throw new NotFoundError('The finding');
+      await repos.conditionReports.removeFinding(findingId);
+      await this.refresh(repos, report);
+      await recordAudit(repos, actor, { action: 'update', entityType: 'condition-report', entityId: reportId, vesselId: report.vesselId, summary: `Finding ${findingId} removed from condition report ${reportId}`, changes: { findings: { from: 'present', to: 'removed' } } });
+    });
+    return this.present(reportId, viewer);
+  }
+}

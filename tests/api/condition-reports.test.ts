@@ -1,0 +1,149 @@
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { addArtifact, deckWithCompartments } from '../support/collection.js';
+import { buildVessel } from '../support/factories.js';
+import { signedInAs, type Client } from '../support/http.js';
+import { createTestApp, type TestApp } from '../support/test-app.js';
+
+let ctx: TestApp;
+let curator: Client;
+let conservator: Client;
+let vesselId: number;
+let place: Awaited<ReturnType<typeof deckWithCompartments>>;
+let gaugeId: number;
+
+beforeEach(async () => {
+  ctx = await createTestApp({}, { mail: false });
+  curator = (await signedInAs(ctx.app, ctx.store, 'curator')).client;
+  conservator = (await signedInAs(ctx.app, ctx.store, 'conservator')).client;
+  vesselId = (await buildVessel(ctx.store, { designationScheme: 'us-navy-1949' })).id;
+  place = await deckWithCompartments(ctx.store, curator, vesselId);
+  gaugeId = (await addArtifact(curator, vesselId, { objectNumber: '2019.4.12', name: 'Steam gauge', compartmentId: place.first, point: [200, 200] })).id;
+});
+afterEach(() => ctx.close());
+
+async function draft(subjectType: 'artifact' | 'compartment' = 'compartment', subjectId = place.first) {
+  const res = await conservator.post('/api/v1/condition-reports', { subjectType, subjectId, inspectedOn: '2026-11-20', method: 'close-visual', temperatureC: 8.5, relativeHumidity: 82, summary: 'Winter survey of the store room.' });
+  expect(res.status, JSON.stringify(res.body)).toBe(201);
+  return res.body;
+}
+
+const coating = { agent: 'incorrect-relative-humidity', damageType: 'coating-failure', severity: 'moderate', percentRusted: 2, rustDistribution: 'G', extentPercent: 15, recommendedAction: 'Spot-prime and overcoat', urgency: 'within-a-year' };
+
+describe('condition reports', () => {
+  it('starts a draft, grades it from its findings by the written rule, and shows the ASTM D610 rust grade', async () => {
+    const report = await draft();
+    expect(report).toMatchObject({ status: 'draft', revision: 1, grade: 'good', findingCount: 0, subjectLabel: '1-10-1-Q Store room', abilities: { update: true, submit: true, amend: false, delete: true } });
+    const withCoating = (await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, coating)).body;
+    expect(withCoating).toMatchObject({ grade: 'fair', computedGrade: 'fair', gradeBecause: '1 moderate finding.', findingCount: 1 });
+    expect(withCoating.findings[0]).toMatchObject({ rustGrade: '5-G', percentRusted: 2, artifactId: null });
+    const withGauge = await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { artifactId: gaugeId, agent: 'thieves-and-vandals', damageType: 'broken-glass-or-dial', severity: 'severe' });
+    expect(withGauge.body).toMatchObject({ grade: 'poor', findingCount: 2 });
+    expect(withGauge.body.findings[1]).toMatchObject({ artifactLabel: '2019.4.12 Steam gauge' });
+  });
+
+  it('keeps the surveyor’s override of the grade only with a reason', async () => {
+    const report = await draft();
+    const noReason = await conservator.patch(`/api/v1/condition-reports/${report.id}`, { gradeOverride: 'poor', version: report.version });
+    expect(noReason.status).toBe(422);
+    expect(noReason.body.error.fields.overrideReason).toBeDefined();
+    const ok = await conservator.patch(`/api/v1/condition-reports/${report.id}`, { gradeOverride: 'poor', overrideReason: 'Hidden corrosion behind the lagging', version: report.version });
+    expect(ok.body).toMatchObject({ grade: 'poor', computedGrade: 'good', gradeOverride: 'poor', overrideReason: 'Hidden corrosion behind the lagging' });
+  });
+
+  it('refuses findings out of scope, damage not of the agent, rust inputs off coatings and percents outside 0–100', async () => {
+    const report = await draft('artifact', gaugeId);
+    const other = (await addArtifact(curator, vesselId, { objectNumber: '2019.4.13', compartmentId: place.second })).id;
+    const outOfScope = await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { artifactId: other, agent: 'water', damageType: 'water-staining', severity: 'slight' });
+    expect(outOfScope.status).toBe(422);
+    expect(outOfScope.body.error.fields.artifactId).toBe('Not in the scope of this report.');
+    const roomReport = await draft('compartment', place.second);
+    expect((await conservator.post(`/api/v1/condition-reports/${roomReport.id}/findings`, { artifactId: gaugeId, agent: 'water', damageType: 'water-staining', severity: 'slight' })).status).toBe(422);
+    expect((await conservator.post(`/api/v1/condition-reports/${roomReport.id}/findings`, { artifactId: other, agent: 'water', damageType: 'water-staining', severity: 'slight' })).status).toBe(201);
+    const wrongAgent = await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { agent: 'fire', damageType: 'graffiti', severity: 'slight' });
+    expect(wrongAgent.body.error.fields.damageType).toBe('Not a damage of this agent.');
+    const rustOnGlass = await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { agent: 'physical-forces', damageType: 'broken-glass-or-dial', severity: 'slight', percentRusted: 3 });
+    expect(rustOnGlass.status).toBe(422);
+    const tooMuch = await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { ...coating, extentPercent: 140 });
+    expect(tooMuch.status).toBe(400);
+    expect(tooMuch.body.error.fields.extentPercent).toBe('Extent must be between 0 and 100.');
+    const humid = await conservator.patch(`/api/v1/condition-reports/${report.id}`, { relativeHumidity: -3, version: report.version });
+    expect(humid.body.error.fields.relativeHumidity).toBe('Relative humidity must be between 0 and 100.');
+    // A finding on an artifact report concerns that artifact unless said otherwise.
+    const own = await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { agent: 'water', damageType: 'water-staining', severity: 'slight' });
+    expect(own.body.findings[0].artifactId).toBe(gaugeId);
+  });
+
+  it('signs on submission and then never changes: edits answer 409 pointing to amend, deletion is refused', async () => {
+    const report = await draft();
+    await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, coating);
+    const current = (await conservator.get(`/api/v1/condition-reports/${report.id}`)).body;
+    const submitted = await curator.post(`/api/v1/condition-reports/${report.id}/submit`, { version: current.version });
+    expect(submitted.status).toBe(200);
+    expect(submitted.body).toMatchObject({ status: 'submitted', signedBy: expect.stringMatching(/curator/), submittedAt: expect.any(String) });
+    const edit = await conservator.patch(`/api/v1/condition-reports/${report.id}`, { summary: 'Changed my mind', version: submitted.body.version });
+    expect(edit.status).toBe(409);
+    expect(edit.body.error.message).toMatch(/Amend it/);
+    expect((await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, coating)).status).toBe(409);
+    expect((await conservator.patch(`/api/v1/condition-reports/${report.id}/findings/${current.findings[0].id}`, { severity: 'slight', version: 1 })).status).toBe(409);
+    expect((await conservator.send('delete', `/api/v1/condition-reports/${report.id}`)).status).toBe(409);
+    expect((await curator.post(`/api/v1/condition-reports/${report.id}/submit`, { version: submitted.body.version })).status).toBe(409);
+    const after = (await conservator.get(`/api/v1/condition-reports/${report.id}`)).body;
+    expect(after).toMatchObject({ summary: 'Winter survey of the store room.', findingCount: 1, status: 'submitted' });
+  });
+
+  it('amends by a new linked revision with the findings copied; both stay readable', async () => {
+    const report = await draft();
+    await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, coating);
+    const v = (await conservator.get(`/api/v1/condition-reports/${report.id}`)).body.version;
+    await conservator.post(`/api/v1/condition-reports/${report.id}/submit`, { version: v });
+    const amendment = await conservator.post(`/api/v1/condition-reports/${report.id}/amend`);
+    expect(amendment.status).toBe(201);
+    expect(amendment.body).toMatchObject({ status: 'draft', revision: 2, supersedesId: report.id, findingCount: 1, grade: 'fair' });
+    expect(amendment.body.findings[0]).toMatchObject({ rustGrade: '5-G', damageType: 'coating-failure' });
+    expect((await conservator.post(`/api/v1/condition-reports/${report.id}/amend`)).status).toBe(409);
+    // The original is unchanged and not yet superseded while the amendment is a draft.
+    expect((await conservator.get(`/api/v1/condition-reports/${report.id}`)).body).toMatchObject({ supersededById: null, abilities: { amend: false } });
+    const fixed = await conservator.patch(`/api/v1/condition-reports/${amendment.body.id}/findings/${amendment.body.findings[0].id}`, { severity: 'severe', version: amendment.body.findings[0].version });
+    expect(fixed.body.grade).toBe('poor');
+    await conservator.post(`/api/v1/condition-reports/${amendment.body.id}/submit`, { version: fixed.body.version });
+    const original = (await conservator.get(`/api/v1/condition-reports/${report.id}`)).body;
+    expect(original).toMatchObject({ supersededById: amendment.body.id, grade: 'fair', status: 'submitted' });
+    expect(original.findings[0].severity).toBe('moderate');
+    const list = (await curator.get(`/api/v1/condition-reports?subjectType=compartment&subjectId=${place.first}`)).body;
+    expect(list.items.map((r: { revision: number; supersededById: number | null }) => [r.revision, r.supersededById])).toEqual([
+      [2, null],
+      [1, amendment.body.id],
+    ]);
+  });
+
+  it('answers a stale report edit with 409 naming what changed', async () => {
+    const report = await draft();
+    const first = await conservator.patch(`/api/v1/condition-reports/${report.id}`, { summary: 'Rust streaks on the deckhead.', version: report.version });
+    expect(first.status).toBe(200);
+    const second = await conservator.patch(`/api/v1/condition-reports/${report.id}`, { method: 'visual', version: report.version });
+    expect(second.status).toBe(409);
+    expect(second.body.error.fields.summary).toMatch(/Rust streaks/);
+  });
+
+  it('lets docents and fundraisers read summaries only, and only conservators write', async () => {
+    const report = await draft();
+    await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, coating);
+    const docent = (await signedInAs(ctx.app, ctx.store, 'docent')).client;
+    const seen = (await docent.get(`/api/v1/condition-reports/${report.id}`)).body;
+    expect(seen).toMatchObject({ grade: 'fair', findingCount: 1, findings: null, abilities: { readFindings: false, update: false } });
+    expect((await docent.get(`/api/v1/condition-reports?vesselId=${vesselId}`)).body.total).toBe(1);
+    expect((await curator.post('/api/v1/condition-reports', { subjectType: 'compartment', subjectId: place.first, inspectedOn: '2026-11-20' })).status).toBe(403);
+    expect((await curator.post(`/api/v1/condition-reports/${report.id}/findings`, coating)).status).toBe(403);
+  });
+
+  it('finds reports by the words of their findings', async () => {
+    const report = await draft();
+    await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { agent: 'thieves-and-vandals', damageType: 'graffiti', severity: 'moderate', description: 'Tagged with marker pen on the bulkhead' });
+    const hit = await curator.get(`/api/v1/condition-reports?vesselId=${vesselId}&q=marker`);
+    expect(hit.body.items.map((r: { id: number }) => r.id)).toEqual([report.id]);
+    expect((await curator.get(`/api/v1/condition-reports?vesselId=${vesselId}&q=whistle`)).body.total).toBe(0);
+    // The draft can go; its search document goes with it.
+    expect((await conservator.send('delete', `/api/v1/condition-reports/${report.id}`)).status).toBe(204);
+    expect((await curator.get(`/api/v1/condition-reports?vesselId=${vesselId}&q=marker`)).body.total).toBe(0);
+  });
+});
