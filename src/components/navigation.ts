@@ -17,6 +17,7 @@ export const STAFF_NAV: NavEntry[] = [
   { label: 'Ship map', icon: 'pi pi-map', route: 'ship-map', permission: { resource: 'deck', action: 'read' } },
   { label: 'Compartments', icon: 'pi pi-th-large', route: 'compartments', permission: { resource: 'compartment', action: 'read' } },
   { label: 'Collection', icon: 'pi pi-box', route: 'artifacts', permission: { resource: 'artifact', action: 'read' } },
+  { label: 'Condition', icon: 'pi pi-clipboard', route: 'condition-reports', permission: { resource: 'conditionReport', action: 'read' } },
   { label: 'People', icon: 'pi pi-users', route: 'people', permission: { resource: 'user', action: 'read' } },
   { label: 'Audit trail', icon: 'pi pi-history', route: 'audit-trail', permission: { resource: 'auditEvent', action: 'read' } },
   { label: 'Outbox', icon: 'pi pi-envelope', route: 'outbox', permission: { resource: 'outbox', action: 'read' } },
