@@ -212,8 +212,13 @@ export class ConditionReportService {
     }
     if (f.location?.on === 'photo') {
       const media = await repos.media.findById(f.location.mediaId);
-      if (!media || media.kind !== 'photo' || media.ownerType !== report.subjectType || media.ownerId !== report.subjectId) {
-        throw new UnprocessableError('Mark the finding on a photo of what this report surveys.', { location: 'Not a photo of this subject.' });
+      const ofSubject = media?.ownerType === report.subjectType && media.ownerId === report.subjectId;
+      // An amendment may point at the photos of the revisions it supersedes.
+      const lineage: number[] = [];
+      for (let r: ConditionReportEntity | null = report; r; r = r.supersedesId ? await repos.conditionReports.findById(r.supersedesId) : null) lineage.push(r.id);
+      const ofReport = media?.ownerType === 'condition-report' && lineage.includes(media.ownerId);
+      if (!media || media.kind !== 'photo' || !(ofSubject || ofReport)) {
+        throw new UnprocessableError('Mark the finding on a photo of this report or of what it surveys.', { location: 'Not a photo of this report or its subject.' });
       }
     }
     if (f.location?.on === 'plan') {

@@ -5,7 +5,7 @@ import { fileTypeFromFile } from 'file-type';
 import { DOCUMENT_FORMATS, MEDIA_FORMATS, PHOTO_FORMATS, type MediaOwnerQuery, type MediaOwnerType, type UpdateMediaBody } from '../../shared/schemas/media.js';
 import type { MediaEntity } from '../db/entities/media.entity.js';
 import type { Repositories, Store } from '../db/store.js';
-import { ApiError, ForbiddenError, NotFoundError, ValidationError } from '../http/errors.js';
+import { ApiError, ConflictError, ForbiddenError, NotFoundError, ValidationError } from '../http/errors.js';
 import { canChangeMediaOf, presentMedia } from '../presenters/media.presenter.js';
 import type { FileStore } from '../storage/file-store.js';
 import { sha256File } from '../storage/hash-file.js';
@@ -15,11 +15,13 @@ import { derivativeFile, makeDerivatives, type PhotoFacts } from './media-deriva
 import type { UploadedFile } from './plan.service.js';
 
 const EXTENSIONS: Record<string, string> = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp', 'application/pdf': 'pdf' };
-const OWNER_LABELS: Record<MediaOwnerType, string> = { artifact: 'artifact', compartment: 'compartment' };
+const OWNER_LABELS: Record<MediaOwnerType, string> = { artifact: 'an artifact', compartment: 'a compartment', 'condition-report': 'a condition report' };
 
 interface Owner {
   vesselId: number;
   label: string;
+  /** A submitted report's photos no longer change. */
+  locked?: boolean;
 }
 
 function safeFileName(name: string): string {
@@ -40,6 +42,11 @@ export class MediaService {
       if (!artifact) throw new NotFoundError('The artifact');
       return { vesselId: artifact.vesselId, label: `artifact ${artifact.objectNumber}` };
     }
+    if (ownerType === 'condition-report') {
+      const report = await repos.conditionReports.findById(ownerId);
+      if (!report) throw new NotFoundError('The condition report');
+      return { vesselId: report.vesselId, label: `condition report ${report.id}`, locked: report.status !== 'draft' };
+    }
     const compartment = await repos.compartments.findById(ownerId);
     if (!compartment) throw new NotFoundError('The compartment');
     return { vesselId: compartment.vesselId, label: `compartment ${compartment.designation}` };
@@ -47,7 +54,7 @@ export class MediaService {
 
   private mayChange(viewer: Express.User, ownerType: MediaOwnerType, action: 'create' | 'update' | 'delete') {
     if (!canChangeMediaOf(viewer.role, ownerType, action)) {
-      throw new ForbiddenError(`Your role cannot change the files of an ${OWNER_LABELS[ownerType]}.`);
+      throw new ForbiddenError(`Your role cannot change the files of ${OWNER_LABELS[ownerType]}.`);
     }
   }
 
@@ -81,6 +88,7 @@ export class MediaService {
     try {
       this.mayChange(viewer, query.ownerType, 'create');
       const owner = await this.ownerOf(this.store.repos, query.ownerType, query.ownerId);
+      if (owner.locked) throw new ConflictError('This report is submitted, so its photos no longer change. Amend it to add photos.');
       const type = await fileTypeFromFile(file.path);
       if (!type || !(MEDIA_FORMATS as readonly string[]).includes(type.mime)) {
         throw new ApiError(415, 'unsupported_media_type', 'This file is not a JPEG, PNG, WebP or PDF file, whatever its name says.', { file: 'Not a JPEG, PNG, WebP or PDF file.' });
@@ -103,8 +111,8 @@ export class MediaService {
       work = null;
       const key = storageKey;
       const saved = await this.store.transaction(async (repos) => {
-        // The owner may have gone while the file was processed.
-        await this.ownerOf(repos, query.ownerType, query.ownerId);
+        // The owner may have gone, or been submitted, while the file was processed.
+        if ((await this.ownerOf(repos, query.ownerType, query.ownerId)).locked) throw new ConflictError('This report was submitted meanwhile; its photos no longer change.');
         const media = await repos.media.create({
           vesselId: owner.vesselId,
           ownerType: query.ownerType,
@@ -148,6 +156,7 @@ export class MediaService {
       const media = await repos.media.findById(id);
       if (!media) throw new NotFoundError('The file');
       this.mayChange(viewer, media.ownerType, 'update');
+      if ((await this.ownerOf(repos, media.ownerType, media.ownerId)).locked) throw new ConflictError('This report is submitted, so its photos no longer change.');
       if (media.version !== body.version) {
         throw await staleEditError(repos, 'media', id, 'this file’s details', media.version, body.version);
       }
@@ -166,6 +175,7 @@ export class MediaService {
       const media = await repos.media.findById(id);
       if (!media) throw new NotFoundError('The file');
       this.mayChange(viewer, media.ownerType, 'delete');
+      if ((await this.ownerOf(repos, media.ownerType, media.ownerId)).locked) throw new ConflictError('This report is submitted, so its photos no longer change.');
       await repos.media.remove(id);
       await this.refreshCover(repos, media.ownerType, media.ownerId);
       await recordAudit(repos, actor, {

@@ -147,3 +147,25 @@ describe('condition reports', () => {
     expect((await curator.get(`/api/v1/condition-reports?vesselId=${vesselId}&q=marker`)).body.total).toBe(0);
   });
 });
+
+describe('photos of a report', () => {
+  it('takes photos while a draft, marks findings on them, and keeps them fixed once submitted', async () => {
+    const { cameraJpeg } = await import('../support/images.js');
+    const report = await draft();
+    const photo = await conservator.agent.post(`/api/v1/media?ownerType=condition-report&ownerId=${report.id}`).set('x-csrf-token', conservator.csrf).attach('file', await cameraJpeg(), 'bulkhead.jpg');
+    expect(photo.status, JSON.stringify(photo.body)).toBe(201);
+    const marked = await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { ...coating, location: { on: 'photo', mediaId: photo.body.id, area: [0.1, 0.2, 0.3, 0.25] } });
+    expect(marked.status).toBe(201);
+    expect(marked.body.findings[0].location).toEqual({ on: 'photo', mediaId: photo.body.id, area: [0.1, 0.2, 0.3, 0.25] });
+    const curatorPhoto = await curator.agent.post(`/api/v1/media?ownerType=condition-report&ownerId=${report.id}`).set('x-csrf-token', curator.csrf).attach('file', await cameraJpeg(), 'x.jpg');
+    expect(curatorPhoto.status).toBe(403);
+    await curator.post(`/api/v1/condition-reports/${report.id}/submit`, { version: marked.body.version });
+    const late = await conservator.agent.post(`/api/v1/media?ownerType=condition-report&ownerId=${report.id}`).set('x-csrf-token', conservator.csrf).attach('file', await cameraJpeg(), 'late.jpg');
+    expect(late.status).toBe(409);
+    expect((await conservator.send('delete', `/api/v1/media/${photo.body.id}`)).status).toBe(409);
+    // The amendment keeps pointing at the original's photo.
+    const amendment = (await conservator.post(`/api/v1/condition-reports/${report.id}/amend`)).body;
+    const moved = await conservator.patch(`/api/v1/condition-reports/${amendment.id}/findings/${amendment.findings[0].id}`, { location: { on: 'photo', mediaId: photo.body.id, area: [0.5, 0.5, 0.1, 0.1] }, version: amendment.findings[0].version });
+    expect(moved.status).toBe(200);
+  });
+});
