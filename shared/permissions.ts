@@ -24,6 +24,8 @@ export const PERMISSIONS = {
   /** Files on a record; the service also asks for the right to change the record they belong to. */
   /** Every staff role reads summaries; findings and details are for the people who care for the ship. */
   conditionReport: { read: STAFF, readFindings: ['admin', 'curator', 'conservator'], create: CONSERVATOR, update: CONSERVATOR, delete: CONSERVATOR, submit: ['conservator', 'curator'], amend: CONSERVATOR },
+  /** Curators log incidents too: they find vandalism on their rounds and close spaces. */
+  incident: { read: STAFF, create: ['conservator', 'curator'], update: ['conservator', 'curator'] },
   media: { read: STAFF, create: ['curator', 'conservator'], update: ['curator', 'conservator'], delete: ['curator', 'conservator'] },
 } as const satisfies Record<string, Record<string, readonly Role[]>>;
 

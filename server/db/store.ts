@@ -2,6 +2,7 @@ import type { DataSource, EntityManager } from 'typeorm';
 import { ArtifactMoveRepository } from './repositories/artifact-move.repository.js';
 import { ArtifactRepository } from './repositories/artifact.repository.js';
 import { ConditionReportRepository } from './repositories/condition-report.repository.js';
+import { IncidentRepository } from './repositories/incident.repository.js';
 import { AuditEventRepository } from './repositories/audit-event.repository.js';
 import { CompartmentRepository } from './repositories/compartment.repository.js';
 import { DeckRepository } from './repositories/deck.repository.js';
@@ -32,6 +33,7 @@ export interface Repositories {
   media: MediaRepository;
   search: SearchIndex;
   conditionReports: ConditionReportRepository;
+  incidents: IncidentRepository;
 }
 
 function repositories(manager: EntityManager): Repositories {
@@ -51,6 +53,7 @@ function repositories(manager: EntityManager): Repositories {
     media: new MediaRepository(manager),
     search: new SearchIndex(manager),
     conditionReports: new ConditionReportRepository(manager),
+    incidents: new IncidentRepository(manager),
   };
 }
 

@@ -47,3 +47,15 @@ export function passwordResetMail(input: { to: string; name: string; url: string
     html: layout(subject, paragraphs, { label: 'Choose a new password', url: input.url }, footer),
   };
 }
+
+/** To a curator: an incident was logged, or a submitted report holds critical findings. */
+export function conditionAlertMail(input: { to: string; name: string; subject: string; lines: string[]; url: string; organisationName: string }): OutgoingMail {
+  const paragraphs = [`Hello ${input.name},`, ...input.lines];
+  const footer = `You receive this as a curator of ${input.organisationName}. Follow the site safety plan before anyone enters a space that may be unsafe.`;
+  return {
+    to: input.to,
+    subject: input.subject,
+    text: `${paragraphs.join('\n\n')}\n\nOpen it in Shipkeeper: ${input.url}\n\n${footer}\n`,
+    html: layout(input.subject, paragraphs, { label: 'Open in Shipkeeper', url: input.url }, footer),
+  };
+}

@@ -9,6 +9,7 @@ import { ConflictError, NotFoundError, UnprocessableError } from '../http/errors
 import { presentReport, presentReportSummary } from '../presenters/condition-report.presenter.js';
 import type { SearchDocument } from '../search/search-index.js';
 import { changesBetween, recordAudit, type Actor } from './audit.service.js';
+import type { ConditionAlerts } from './condition-alerts.js';
 import { staleEditError } from './stale-edit.js';
 
 const REPORT_FIELDS: (keyof ConditionReportEntity)[] = ['inspectedOn', 'method', 'temperatureC', 'relativeHumidity', 'summary', 'gradeOverride', 'overrideReason'];
@@ -28,7 +29,7 @@ const SUBMITTED = 'This report is submitted and signed, so it no longer changes.
  * 409 for a stale save reads to say what changed.
  */
 export class ConditionReportService {
-  constructor(private readonly store: Store) {}
+  constructor(private readonly store: Store, private readonly alerts: ConditionAlerts) {}
 
   private async subjectOf(repos: Repositories, type: 'artifact' | 'compartment', id: number): Promise<Subject> {
     if (type === 'artifact') {
@@ -136,7 +137,7 @@ export class ConditionReportService {
   }
 
   async submit(id: number, version: number, viewer: Express.User, actor: Actor) {
-    await this.store.transaction(async (repos) => {
+    const critical = await this.store.transaction(async (repos) => {
       const report = await this.draftForChange(repos, id, version);
       if (report.supersedesId) {
         const previous = await repos.conditionReports.findById(report.supersedesId);
@@ -154,8 +155,48 @@ export class ConditionReportService {
         summary: `Condition report ${id} submitted and signed by ${viewer.name}${report.supersedesId ? `, superseding report ${report.supersedesId}` : ''}`,
         changes: { status: { from: 'draft', to: 'submitted' } },
       });
+      const findings = await repos.conditionReports.findings(id);
+      const subject = await this.subjectOf(repos, report.subjectType, report.subjectId);
+      return { subject, findings: findings.filter((f) => f.severity === 'critical') };
     });
+    if (critical.findings.length) {
+      const n = critical.findings.length;
+      await this.alerts.tellCurators(
+        `Critical finding${n > 1 ? 's' : ''} on ${critical.subject.label}`,
+        [
+          `Condition report ${id} on ${critical.subject.label}, submitted by ${viewer.name}, records ${n === 1 ? 'a critical finding' : `${n} critical findings`}:`,
+          ...critical.findings.map((f) => `${DAMAGE_TYPES[f.damageType].label} (${AGENT_LABELS[f.agent].toLowerCase()})${f.artifact ? ` on ${f.artifact.objectNumber} ${f.artifact.name}` : ''}: ${f.recommendedAction || 'no action recommended yet'}.`),
+        ],
+        `/app/condition/${id}`,
+      );
+    }
     return this.present(id, viewer);
+  }
+
+  /** Opens a draft report on an item with one finding, inside the caller's transaction (incidents). */
+  async openDraftWithFinding(
+    repos: Repositories,
+    subject: { type: 'artifact' | 'compartment'; id: number },
+    report: Pick<ConditionReportEntity, 'inspectedOn' | 'summary'>,
+    finding: Pick<ConditionFindingEntity, 'agent' | 'damageType' | 'severity' | 'description'>,
+    surveyorId: number | null,
+  ): Promise<ConditionReportEntity> {
+    const vessel = await this.subjectOf(repos, subject.type, subject.id);
+    const created = await repos.conditionReports.create({ ...report, subjectType: subject.type, subjectId: subject.id, vesselId: vessel.vesselId, surveyorId, status: 'draft', revision: 1, method: 'visual' });
+    await repos.conditionReports.createFinding({
+      ...finding,
+      reportId: created.id,
+      artifactId: subject.type === 'artifact' ? subject.id : null,
+      location: null,
+      extentPercent: null,
+      percentRusted: null,
+      rustDistribution: null,
+      rustGrade: null,
+      recommendedAction: '',
+      urgency: finding.severity === 'critical' ? 'immediate' : 'within-a-month',
+      position: 0,
+    });
+    return this.refresh(repos, created);
   }
 
   /** A new draft revision with the same fields and findings, linked to the submitted report it will supersede. */

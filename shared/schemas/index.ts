@@ -17,3 +17,4 @@ export * from './artifacts.js';
 export * from './media.js';
 export * from './artifact-import.js';
 export * from './condition.js';
+export * from './incidents.js';

@@ -48,6 +48,9 @@ const MATRIX: Record<string, Record<Role, boolean>> = {
   'conditionReport.delete': { admin: false, curator: false, conservator: true, docent: false, fundraiser: false },
   'conditionReport.submit': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
   'conditionReport.amend': { admin: false, curator: false, conservator: true, docent: false, fundraiser: false },
+  'incident.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
+  'incident.create': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
+  'incident.update': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
   // Files: curators and conservators, further limited to records their role may change (media.presenter.ts).
   'media.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
   'media.create': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },

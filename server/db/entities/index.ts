@@ -2,6 +2,8 @@ import { ArtifactMoveEntity } from './artifact-move.entity.js';
 import { ArtifactEntity } from './artifact.entity.js';
 import { ConditionFindingEntity } from './condition-finding.entity.js';
 import { ConditionReportEntity } from './condition-report.entity.js';
+import { IncidentSubjectEntity } from './incident-subject.entity.js';
+import { IncidentEntity } from './incident.entity.js';
 import { AuditEventEntity } from './audit-event.entity.js';
 import { CompartmentEntity } from './compartment.entity.js';
 import { DeckEntity } from './deck.entity.js';
@@ -15,6 +17,6 @@ import { SessionEntity } from './session.entity.js';
 import { UserEntity } from './user.entity.js';
 import { VesselEntity } from './vessel.entity.js';
 
-export { ConditionReportEntity, ConditionFindingEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, AuditEventEntity, CompartmentEntity, DeckEntity, HazardEntity, InvitationEntity, OrganisationSettingsEntity, PasswordResetEntity, PlanEntity, SessionEntity, UserEntity, VesselEntity };
+export { IncidentEntity, IncidentSubjectEntity, ConditionReportEntity, ConditionFindingEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, AuditEventEntity, CompartmentEntity, DeckEntity, HazardEntity, InvitationEntity, OrganisationSettingsEntity, PasswordResetEntity, PlanEntity, SessionEntity, UserEntity, VesselEntity };
 
-export const entities = [UserEntity, VesselEntity, OrganisationSettingsEntity, AuditEventEntity, SessionEntity, InvitationEntity, PasswordResetEntity, DeckEntity, CompartmentEntity, HazardEntity, PlanEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, ConditionReportEntity, ConditionFindingEntity];
+export const entities = [UserEntity, VesselEntity, OrganisationSettingsEntity, AuditEventEntity, SessionEntity, InvitationEntity, PasswordResetEntity, DeckEntity, CompartmentEntity, HazardEntity, PlanEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, ConditionReportEntity, ConditionFindingEntity, IncidentEntity, IncidentSubjectEntity];

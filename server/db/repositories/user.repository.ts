@@ -10,6 +10,11 @@ export class UserRepository {
     return this.manager.getRepository(UserEntity);
   }
 
+  /** Active people of a role (who gets the condition alerts). */
+  activeWithRole(role: UserEntity['role']) {
+    return this.repo.find({ where: { role, status: 'active' }, order: { id: 'ASC' } });
+  }
+
   findById(id: number) {
     return this.repo.findOneBy({ id });
   }

@@ -1,0 +1,44 @@
+import { MigrationInterface, QueryRunner } from "typeorm";
+
+export class Incidents1796217615866 implements MigrationInterface {
+    name = 'Incidents1796217615866'
+
+    public async up(queryRunner: QueryRunner): Promise<void> {
+        await queryRunner.query(`CREATE TABLE "incidents" ("id" integer PRIMARY KEY AUTOINCREMENT NOT NULL, "vesselId" integer NOT NULL, "kind" varchar(20) NOT NULL, "title" varchar(200) NOT NULL, "foundOn" varchar(10) NOT NULL, "occurredOn" varchar(10), "description" text NOT NULL DEFAULT (''), "reportedTo" varchar(300) NOT NULL DEFAULT (''), "policeReference" varchar(100) NOT NULL DEFAULT (''), "actionsTaken" text NOT NULL DEFAULT (''), "closedCompartmentIds" text NOT NULL, "reportIds" text NOT NULL, "loggedById" integer, "createdAt" datetime NOT NULL DEFAULT (datetime('now')), "updatedAt" datetime NOT NULL DEFAULT (datetime('now')), "version" integer NOT NULL)`);
+        await queryRunner.query(`CREATE INDEX "IDX_b8809ab2aaa7ac6fab8edca265" ON "incidents" ("vesselId", "foundOn") `);
+        await queryRunner.query(`CREATE TABLE "incident_subjects" ("incidentId" integer NOT NULL, "subjectType" varchar(20) NOT NULL, "subjectId" integer NOT NULL, PRIMARY KEY ("incidentId", "subjectType", "subjectId"))`);
+        await queryRunner.query(`CREATE INDEX "IDX_63f1321ae25464b650065f8a64" ON "incident_subjects" ("subjectType", "subjectId") `);
+        await queryRunner.query(`DROP INDEX "IDX_b8809ab2aaa7ac6fab8edca265"`);
+        await queryRunner.query(`CREATE TABLE "temporary_incidents" ("id" integer PRIMARY KEY AUTOINCREMENT NOT NULL, "vesselId" integer NOT NULL, "kind" varchar(20) NOT NULL, "title" varchar(200) NOT NULL, "foundOn" varchar(10) NOT NULL, "occurredOn" varchar(10), "description" text NOT NULL DEFAULT (''), "reportedTo" varchar(300) NOT NULL DEFAULT (''), "policeReference" varchar(100) NOT NULL DEFAULT (''), "actionsTaken" text NOT NULL DEFAULT (''), "closedCompartmentIds" text NOT NULL, "reportIds" text NOT NULL, "loggedById" integer, "createdAt" datetime NOT NULL DEFAULT (datetime('now')), "updatedAt" datetime NOT NULL DEFAULT (datetime('now')), "version" integer NOT NULL, CONSTRAINT "FK_1dc8ca233b57725a69b305c764d" FOREIGN KEY ("vesselId") REFERENCES "vessels" ("id") ON DELETE CASCADE ON UPDATE NO ACTION, CONSTRAINT "FK_6fa1930d6de112d18b98743674c" FOREIGN KEY ("loggedById") REFERENCES "users" ("id") ON DELETE SET NULL ON UPDATE NO ACTION)`);
+        await queryRunner.query(`INSERT INTO "temporary_incidents"("id", "vesselId", "kind", "title", "foundOn", "occurredOn", "description", "reportedTo", "policeReference", "actionsTaken", "closedCompartmentIds", "reportIds", "loggedById", "createdAt", "updatedAt", "version") SELECT "id", "vesselId", "kind", "title", "foundOn", "occurredOn", "description", "reportedTo", "policeReference", "actionsTaken", "closedCompartmentIds", "reportIds", "loggedById", "createdAt", "updatedAt", "version" FROM "incidents"`);
+        await queryRunner.query(`DROP TABLE "incidents"`);
+        await queryRunner.query(`ALTER TABLE "temporary_incidents" RENAME TO "incidents"`);
+        await queryRunner.query(`CREATE INDEX "IDX_b8809ab2aaa7ac6fab8edca265" ON "incidents" ("vesselId", "foundOn") `);
+        await queryRunner.query(`DROP INDEX "IDX_63f1321ae25464b650065f8a64"`);
+        await queryRunner.query(`CREATE TABLE "temporary_incident_subjects" ("incidentId" integer NOT NULL, "subjectType" varchar(20) NOT NULL, "subjectId" integer NOT NULL, CONSTRAINT "FK_69abd008b9d098432dfacf13d0d" FOREIGN KEY ("incidentId") REFERENCES "incidents" ("id") ON DELETE CASCADE ON UPDATE NO ACTION, PRIMARY KEY ("incidentId", "subjectType", "subjectId"))`);
+        await queryRunner.query(`INSERT INTO "temporary_incident_subjects"("incidentId", "subjectType", "subjectId") SELECT "incidentId", "subjectType", "subjectId" FROM "incident_subjects"`);
+        await queryRunner.query(`DROP TABLE "incident_subjects"`);
+        await queryRunner.query(`ALTER TABLE "temporary_incident_subjects" RENAME TO "incident_subjects"`);
+        await queryRunner.query(`CREATE INDEX "IDX_63f1321ae25464b650065f8a64" ON "incident_subjects" ("subjectType", "subjectId") `);
+    }
+
+    public async down(queryRunner: QueryRunner): Promise<void> {
+        await queryRunner.query(`DROP INDEX "IDX_63f1321ae25464b650065f8a64"`);
+        await queryRunner.query(`ALTER TABLE "incident_subjects" RENAME TO "temporary_incident_subjects"`);
+        await queryRunner.query(`CREATE TABLE "incident_subjects" ("incidentId" integer NOT NULL, "subjectType" varchar(20) NOT NULL, "subjectId" integer NOT NULL, PRIMARY KEY ("incidentId", "subjectType", "subjectId"))`);
+        await queryRunner.query(`INSERT INTO "incident_subjects"("incidentId", "subjectType", "subjectId") SELECT "incidentId", "subjectType", "subjectId" FROM "temporary_incident_subjects"`);
+        await queryRunner.query(`DROP TABLE "temporary_incident_subjects"`);
+        await queryRunner.query(`CREATE INDEX "IDX_63f1321ae25464b650065f8a64" ON "incident_subjects" ("subjectType", "subjectId") `);
+        await queryRunner.query(`DROP INDEX "IDX_b8809ab2aaa7ac6fab8edca265"`);
+        await queryRunner.query(`ALTER TABLE "incidents" RENAME TO "temporary_incidents"`);
+        await queryRunner.query(`CREATE TABLE "incidents" ("id" integer PRIMARY KEY AUTOINCREMENT NOT NULL, "vesselId" integer NOT NULL, "kind" varchar(20) NOT NULL, "title" varchar(200) NOT NULL, "foundOn" varchar(10) NOT NULL, "occurredOn" varchar(10), "description" text NOT NULL DEFAULT (''), "reportedTo" varchar(300) NOT NULL DEFAULT (''), "policeReference" varchar(100) NOT NULL DEFAULT (''), "actionsTaken" text NOT NULL DEFAULT (''), "closedCompartmentIds" text NOT NULL, "reportIds" text NOT NULL, "loggedById" integer, "createdAt" datetime NOT NULL DEFAULT (datetime('now')), "updatedAt" datetime NOT NULL DEFAULT (datetime('now')), "version" integer NOT NULL)`);
+        await queryRunner.query(`INSERT INTO "incidents"("id", "vesselId", "kind", "title", "foundOn", "occurredOn", "description", "reportedTo", "policeReference", "actionsTaken", "closedCompartmentIds", "reportIds", "loggedById", "createdAt", "updatedAt", "version") SELECT "id", "vesselId", "kind", "title", "foundOn", "occurredOn", "description", "reportedTo", "policeReference", "actionsTaken", "closedCompartmentIds", "reportIds", "loggedById", "createdAt", "updatedAt", "version" FROM "temporary_incidents"`);
+        await queryRunner.query(`DROP TABLE "temporary_incidents"`);
+        await queryRunner.query(`CREATE INDEX "IDX_b8809ab2aaa7ac6fab8edca265" ON "incidents" ("vesselId", "foundOn") `);
+        await queryRunner.query(`DROP INDEX "IDX_63f1321ae25464b650065f8a64"`);
+        await queryRunner.query(`DROP TABLE "incident_subjects"`);
+        await queryRunner.query(`DROP INDEX "IDX_b8809ab2aaa7ac6fab8edca265"`);
+        await queryRunner.query(`DROP TABLE "incidents"`);
+    }
+
+}

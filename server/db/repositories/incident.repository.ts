@@ -1,0 +1,47 @@
+import { In, type EntityManager } from 'typeorm';
+import type { IncidentsQuery } from '../../../shared/schemas/incidents.js';
+import { IncidentSubjectEntity } from '../entities/incident-subject.entity.js';
+import { IncidentEntity } from '../entities/incident.entity.js';
+import { pageOf } from './paging.js';
+
+export class IncidentRepository {
+  constructor(private readonly manager: EntityManager) {}
+
+  private get repo() {
+    return this.manager.getRepository(IncidentEntity);
+  }
+
+  private get subjects() {
+    return this.manager.getRepository(IncidentSubjectEntity);
+  }
+
+  findById(id: number) {
+    return this.repo.findOne({ where: { id }, relations: { loggedBy: true } });
+  }
+
+  page(query: IncidentsQuery) {
+    const qb = this.repo.createQueryBuilder('incident').leftJoinAndSelect('incident.loggedBy', 'loggedBy').where('incident.vesselId = :vesselId', { vesselId: query.vesselId });
+    if (query.kind) qb.andWhere('incident.kind = :kind', { kind: query.kind });
+    for (const [type, id] of [['artifact', query.artifactId], ['compartment', query.compartmentId]] as const) {
+      if (!id) continue;
+      qb.andWhere(`EXISTS (SELECT 1 FROM incident_subjects s WHERE s.incidentId = incident.id AND s.subjectType = :${type}Type AND s.subjectId = :${type}Id)`, { [`${type}Type`]: type, [`${type}Id`]: id });
+    }
+    return pageOf(qb, query);
+  }
+
+  subjectsOf(incidentIds: number[]) {
+    return incidentIds.length ? this.subjects.find({ where: { incidentId: In(incidentIds) } }) : Promise.resolve([]);
+  }
+
+  create(fields: Partial<IncidentEntity>) {
+    return this.repo.save(this.repo.create(fields));
+  }
+
+  save(incident: IncidentEntity) {
+    return this.repo.save(incident);
+  }
+
+  async link(incidentId: number, subjectType: 'artifact' | 'compartment', subjectId: number) {
+    await this.subjects.save(this.subjects.create({ incidentId, subjectType, subjectId }));
+  }
+}

@@ -1,0 +1,59 @@
+import { idParam } from '../../shared/schemas/common.js';
+import { createIncidentBody, incident, incidentPage, incidentsQuery, updateIncidentBody } from '../../shared/schemas/incidents.js';
+import type { ApiRouter } from '../http/api-router.js';
+import { allowed } from '../http/access.js';
+import { actorOf } from '../services/audit.service.js';
+import type { IncidentService } from '../services/incident.service.js';
+
+export function incidentRoutes(api: ApiRouter, incidents: IncidentService) {
+  const tag = 'Condition';
+
+  api.route({
+    method: 'get',
+    path: '/incidents',
+    tag,
+    summary: "A vessel's incidents, newest first; filter by kind, artifact or compartment",
+    access: allowed('incident', 'read'),
+    query: incidentsQuery,
+    response: incidentPage,
+    handler: ({ query }) => incidents.list(query),
+  });
+
+  api.route({
+    method: 'post',
+    path: '/incidents',
+    tag,
+    summary: 'Log an incident: may close affected compartments to visitors, opens a draft report with a finding on each affected item, and e-mails the curators',
+    access: allowed('incident', 'create'),
+    body: createIncidentBody,
+    status: 201,
+    response: incident,
+    errors: [422],
+    handler: ({ req, body }) => incidents.create(body, req.user!, actorOf(req)),
+  });
+
+  api.route({
+    method: 'get',
+    path: '/incidents/:id',
+    tag,
+    summary: 'One incident',
+    access: allowed('incident', 'read'),
+    params: idParam,
+    response: incident,
+    errors: [404],
+    handler: ({ params }) => incidents.get(params.id),
+  });
+
+  api.route({
+    method: 'patch',
+    path: '/incidents/:id',
+    tag,
+    summary: 'Add to what is known of an incident (who it was reported to, actions taken)',
+    access: allowed('incident', 'update'),
+    params: idParam,
+    body: updateIncidentBody,
+    response: incident,
+    errors: [404, 409],
+    handler: ({ req, params, body }) => incidents.update(params.id, body, actorOf(req)),
+  });
+}

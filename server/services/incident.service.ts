@@ -1,0 +1,169 @@
+import type { Agent, DamageType } from '../../shared/schemas/condition.js';
+import { INCIDENT_KIND_LABELS, type IncidentKind, type IncidentsQuery, type UpdateIncidentBody, type createIncidentBody } from '../../shared/schemas/incidents.js';
+import type { Incident } from '../../shared/schemas/incidents.js';
+import type { z } from 'zod';
+import type { IncidentSubjectEntity } from '../db/entities/incident-subject.entity.js';
+import type { IncidentEntity } from '../db/entities/incident.entity.js';
+import type { Repositories, Store } from '../db/store.js';
+import { NotFoundError, UnprocessableError } from '../http/errors.js';
+import { changesBetween, recordAudit, type Actor } from './audit.service.js';
+import type { ConditionAlerts } from './condition-alerts.js';
+import type { ConditionReportService } from './condition-report.service.js';
+import { staleEditError } from './stale-edit.js';
+
+/** The finding an incident writes on each item it affected. */
+const FINDING_OF: Record<IncidentKind, { agent: Agent; damageType: DamageType }> = {
+  vandalism: { agent: 'thieves-and-vandals', damageType: 'impact-damage' },
+  theft: { agent: 'thieves-and-vandals', damageType: 'missing-part' },
+  'water-ingress': { agent: 'water', damageType: 'water-staining' },
+  fire: { agent: 'fire', damageType: 'scorching-or-soot' },
+  accident: { agent: 'physical-forces', damageType: 'impact-damage' },
+  other: { agent: 'physical-forces', damageType: 'other' },
+};
+
+/**
+ * Incidents: what happened, what it affected and what was done. Logging one can close affected
+ * compartments to visitors, opens a draft condition report with a finding on every affected item,
+ * and tells the curators by e-mail.
+ */
+export class IncidentService {
+  constructor(private readonly store: Store, private readonly reports: ConditionReportService, private readonly alerts: ConditionAlerts) {}
+
+  private async present(incident: IncidentEntity, subjects: IncidentSubjectEntity[]): Promise<Incident> {
+    const repos = this.store.repos;
+    const artifacts = [];
+    const compartments = [];
+    for (const s of subjects.filter((x) => x.incidentId === incident.id)) {
+      if (s.subjectType === 'artifact') {
+        const a = await repos.artifacts.findById(s.subjectId);
+        artifacts.push({ id: s.subjectId, label: a ? `${a.objectNumber} ${a.name}` : `Artifact ${s.subjectId}` });
+      } else {
+        const c = await repos.compartments.findById(s.subjectId);
+        compartments.push({ id: s.subjectId, label: c ? `${c.designation} ${c.name}` : `Compartment ${s.subjectId}` });
+      }
+    }
+    return {
+      id: incident.id,
+      vesselId: incident.vesselId,
+      kind: incident.kind,
+      title: incident.title,
+      foundOn: incident.foundOn,
+      occurredOn: incident.occurredOn,
+      description: incident.description,
+      reportedTo: incident.reportedTo,
+      policeReference: incident.policeReference,
+      actionsTaken: incident.actionsTaken,
+      artifacts,
+      compartments,
+      closedCompartmentIds: incident.closedCompartmentIds,
+      reportIds: incident.reportIds,
+      loggedBy: incident.loggedBy ? { id: incident.loggedBy.id, name: incident.loggedBy.name } : null,
+      createdAt: incident.createdAt.toISOString(),
+      version: incident.version,
+    };
+  }
+
+  async list(query: IncidentsQuery) {
+    const page = await this.store.repos.incidents.page(query);
+    const subjects = await this.store.repos.incidents.subjectsOf(page.items.map((i) => i.id));
+    const items = [];
+    for (const incident of page.items) items.push(await this.present(incident, subjects));
+    return { ...page, items };
+  }
+
+  async get(id: number) {
+    const incident = await this.store.repos.incidents.findById(id);
+    if (!incident) throw new NotFoundError('The incident');
+    return this.present(incident, await this.store.repos.incidents.subjectsOf([id]));
+  }
+
+  private async checkSubjects(repos: Repositories, vesselId: number, artifactIds: number[], compartmentIds: number[]) {
+    for (const id of artifactIds) {
+      const artifact = await repos.artifacts.findById(id);
+      if (!artifact || artifact.vesselId !== vesselId) throw new UnprocessableError(`Artifact ${id} is not in the collection of this vessel.`, { artifactIds: `Not an artifact of this vessel: ${id}.` });
+    }
+    for (const id of compartmentIds) {
+      const compartment = await repos.compartments.findById(id);
+      if (!compartment || compartment.vesselId !== vesselId) throw new UnprocessableError(`Compartment ${id} is not on this vessel.`, { compartmentIds: `Not a compartment of this vessel: ${id}.` });
+    }
+  }
+
+  async create(body: z.output<typeof createIncidentBody>, viewer: Express.User, actor: Actor) {
+    const artifactIds = [...new Set(body.artifactIds)];
+    const compartmentIds = [...new Set(body.compartmentIds)];
+    const closing = [...new Set(body.closeCompartmentIds)];
+    const stray = closing.filter((id) => !compartmentIds.includes(id));
+    if (stray.length) throw new UnprocessableError('Only an affected compartment can be closed: add it to the affected compartments first.', { closeCompartmentIds: 'Not among the affected compartments.' });
+    const saved = await this.store.transaction(async (repos) => {
+      const vessel = await repos.vessels.findById(body.vesselId);
+      if (!vessel) throw new UnprocessableError('Choose a vessel.', { vesselId: 'No such vessel.' });
+      await this.checkSubjects(repos, vessel.id, artifactIds, compartmentIds);
+      const { artifactIds: _a, compartmentIds: _c, closeCompartmentIds: _x, severity, ...fields } = body;
+      const incident = await repos.incidents.create({ ...fields, closedCompartmentIds: [], reportIds: [], loggedById: viewer.id });
+      const reportIds: number[] = [];
+      const finding = { ...FINDING_OF[body.kind], severity, description: `${INCIDENT_KIND_LABELS[body.kind]} (incident ${incident.id}): ${body.title}. ${body.description}`.trim() };
+      for (const [type, ids] of [['artifact', artifactIds], ['compartment', compartmentIds]] as const) {
+        for (const id of ids) {
+          await repos.incidents.link(incident.id, type, id);
+          const report = await this.reports.openDraftWithFinding(repos, { type, id }, { inspectedOn: body.foundOn, summary: `Opened by incident ${incident.id}: ${body.title}` }, finding, viewer.id);
+          reportIds.push(report.id);
+        }
+      }
+      for (const id of closing) {
+        const compartment = (await repos.compartments.findById(id))!;
+        if (compartment.accessStatus === 'staff-only' || compartment.accessStatus === 'sealed') continue;
+        const from = compartment.accessStatus;
+        compartment.accessStatus = 'staff-only';
+        await repos.compartments.save(compartment);
+        incident.closedCompartmentIds.push(id);
+        await recordAudit(repos, actor, {
+          action: 'update',
+          entityType: 'compartment',
+          entityId: id,
+          vesselId: vessel.id,
+          summary: `Compartment ${compartment.designation} closed to visitors after incident ${incident.id}`,
+          changes: { accessStatus: { from, to: 'staff-only' } },
+        });
+      }
+      incident.reportIds = reportIds;
+      const result = await repos.incidents.save(incident);
+      await recordAudit(repos, actor, {
+        action: 'create',
+        entityType: 'incident',
+        entityId: incident.id,
+        vesselId: vessel.id,
+        summary: `${INCIDENT_KIND_LABELS[body.kind]} logged: ${body.title}`,
+      });
+      return result;
+    });
+    const presented = await this.get(saved.id);
+    const affected = [...presented.artifacts, ...presented.compartments].map((s) => s.label);
+    await this.alerts.tellCurators(
+      `${INCIDENT_KIND_LABELS[presented.kind]}: ${presented.title}`,
+      [
+        `${viewer.name} logged an incident found on ${presented.foundOn}${presented.occurredOn ? ` (it happened on ${presented.occurredOn})` : ''}: ${presented.title}.`,
+        affected.length ? `Affected: ${affected.join('; ')}.` : 'No artifact or compartment is named yet.',
+        ...(presented.closedCompartmentIds.length ? [`Closed to visitors: ${presented.compartments.filter((c) => presented.closedCompartmentIds.includes(c.id)).map((c) => c.label).join('; ')}.`] : []),
+        ...(body.severity === 'critical' ? ['The damage is recorded as critical.'] : []),
+        ...(presented.policeReference ? [`Police reference: ${presented.policeReference}.`] : []),
+      ],
+      `/app/incidents/${presented.id}`,
+    );
+    return presented;
+  }
+
+  async update(id: number, body: UpdateIncidentBody, actor: Actor) {
+    await this.store.transaction(async (repos) => {
+      const incident = await repos.incidents.findById(id);
+      if (!incident) throw new NotFoundError('The incident');
+      if (incident.version !== body.version) throw await staleEditError(repos, 'incident', id, 'this incident', incident.version, body.version);
+      const { version: _v, ...fields } = body;
+      const changes = changesBetween(incident, fields, ['title', 'occurredOn', 'description', 'reportedTo', 'policeReference', 'actionsTaken']);
+      if (!changes) return;
+      Object.assign(incident, fields);
+      await repos.incidents.save(incident);
+      await recordAudit(repos, actor, { action: 'update', entityType: 'incident', entityId: id, vesselId: incident.vesselId, summary: `Incident ${id} changed (${Object.keys(changes).join(', ')})`, changes });
+    });
+    return this.get(id);
+  }
+}

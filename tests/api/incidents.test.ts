@@ -1,0 +1,103 @@
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { addArtifact, deckWithCompartments } from '../support/collection.js';
+import { buildUser, buildVessel } from '../support/factories.js';
+import { signedInAs, waitForMail, type Client } from '../support/http.js';
+import { createTestApp, type TestApp } from '../support/test-app.js';
+
+let ctx: TestApp;
+let curator: Client;
+let conservator: Client;
+let vesselId: number;
+let place: Awaited<ReturnType<typeof deckWithCompartments>>;
+let gaugeId: number;
+
+beforeEach(async () => {
+  ctx = await createTestApp();
+  curator = (await signedInAs(ctx.app, ctx.store, 'curator')).client;
+  conservator = (await signedInAs(ctx.app, ctx.store, 'conservator')).client;
+  vesselId = (await buildVessel(ctx.store, { designationScheme: 'us-navy-1949' })).id;
+  place = await deckWithCompartments(ctx.store, curator, vesselId);
+  const room = (await curator.get(`/api/v1/compartments/${place.second}`)).body;
+  await curator.patch(`/api/v1/compartments/${place.second}`, { accessStatus: 'open', version: room.version });
+  gaugeId = (await addArtifact(curator, vesselId, { objectNumber: '2019.4.12', name: 'Steam gauge', compartmentId: place.second })).id;
+});
+afterEach(() => ctx.close());
+
+describe('incidents', () => {
+  it('closes the space, opens a report with a finding on each affected item, and e-mails every curator', async () => {
+    await buildUser(ctx.store, { role: 'curator', email: 'second-curator@example.test' });
+    await buildUser(ctx.store, { role: 'curator', email: 'gone-curator@example.test', status: 'deactivated' });
+    const res = await conservator.post('/api/v1/incidents', {
+      vesselId,
+      kind: 'vandalism',
+      title: 'Gauge glass smashed in the magazine',
+      foundOn: '2026-11-29',
+      occurredOn: '2026-11-28',
+      description: 'Glass of the steam gauge broken, bezel bent.',
+      reportedTo: 'Harbour security; police',
+      policeReference: 'PR-2026-1187',
+      artifactIds: [gaugeId],
+      compartmentIds: [place.second],
+      closeCompartmentIds: [place.second],
+      severity: 'severe',
+    });
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    expect(res.body).toMatchObject({ kind: 'vandalism', closedCompartmentIds: [place.second], artifacts: [{ id: gaugeId, label: '2019.4.12 Steam gauge' }], compartments: [{ id: place.second }] });
+    expect(res.body.reportIds).toHaveLength(2);
+
+    const room = (await curator.get(`/api/v1/compartments/${place.second}`)).body;
+    expect(room.accessStatus).toBe('staff-only');
+    const closedEvent = (await ctx.store.repos.auditEvents.latestFor('compartment', place.second, 1))[0]!;
+    expect(closedEvent.summary).toBe(`Compartment 1-40-2-M closed to visitors after incident ${res.body.id}`);
+
+    const report = (await conservator.get(`/api/v1/condition-reports/${res.body.reportIds[0]}`)).body;
+    expect(report).toMatchObject({ status: 'draft', subjectType: 'artifact', subjectId: gaugeId, grade: 'poor', inspectedOn: '2026-11-29' });
+    expect(report.findings[0]).toMatchObject({ agent: 'thieves-and-vandals', severity: 'severe', artifactId: gaugeId });
+
+    const curators = (await ctx.store.repos.users.activeWithRole('curator')).map((u) => u.email);
+    expect(curators).toHaveLength(2);
+    for (const to of curators) {
+      const mail = await waitForMail(ctx.fakeMail, to);
+      expect(mail.subject).toBe('Vandalism: Gauge glass smashed in the magazine');
+      expect(mail.text).toContain('Closed to visitors: 1-40-2-M Magazine.');
+      expect(mail.text).toContain('Police reference: PR-2026-1187.');
+    }
+    expect(ctx.fakeMail.list().some((m) => m.to.includes('gone-curator@example.test'))).toBe(false);
+    const byArtifact = (await curator.get(`/api/v1/incidents?vesselId=${vesselId}&artifactId=${gaugeId}`)).body;
+    expect(byArtifact.items.map((i: { id: number }) => i.id)).toEqual([res.body.id]);
+    expect((await curator.get(`/api/v1/incidents?vesselId=${vesselId}&compartmentId=${place.first}`)).body.total).toBe(0);
+  });
+
+  it('refuses to close a compartment it does not name, or items of another vessel, and keeps nothing', async () => {
+    const notNamed = await conservator.post('/api/v1/incidents', { vesselId, kind: 'water-ingress', title: 'Leak', foundOn: '2026-11-29', compartmentIds: [place.first], closeCompartmentIds: [place.second] });
+    expect(notNamed.status).toBe(422);
+    expect(notNamed.body.error.fields.closeCompartmentIds).toBeDefined();
+    const otherVessel = (await buildVessel(ctx.store)).id;
+    const foreign = await conservator.post('/api/v1/incidents', { vesselId: otherVessel, kind: 'theft', title: 'Gone', foundOn: '2026-11-29', artifactIds: [gaugeId] });
+    expect(foreign.status).toBe(422);
+    expect((await curator.get(`/api/v1/incidents?vesselId=${vesselId}`)).body.total).toBe(0);
+    expect((await curator.get(`/api/v1/condition-reports?vesselId=${vesselId}`)).body.total).toBe(0);
+    expect(ctx.fakeMail.list()).toHaveLength(0);
+  });
+
+  it('is logged by conservators and curators, and read by everyone on the staff', async () => {
+    const docent = (await signedInAs(ctx.app, ctx.store, 'docent')).client;
+    expect((await docent.post('/api/v1/incidents', { vesselId, kind: 'other', title: 'X', foundOn: '2026-11-29' })).status).toBe(403);
+    const logged = await curator.post('/api/v1/incidents', { vesselId, kind: 'accident', title: 'Visitor knocked a valve wheel', foundOn: '2026-11-29' });
+    expect(logged.status).toBe(201);
+    expect((await docent.get(`/api/v1/incidents/${logged.body.id}`)).body.title).toBe('Visitor knocked a valve wheel');
+  });
+});
+
+describe('critical findings', () => {
+  it('e-mail the curators when the report is submitted', async () => {
+    const report = (await conservator.post('/api/v1/condition-reports', { subjectType: 'artifact', subjectId: gaugeId, inspectedOn: '2026-11-20' })).body;
+    const withFinding = (await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { agent: 'physical-forces', damageType: 'loose-or-detached', severity: 'critical', recommendedAction: 'Take it down before it falls' })).body;
+    expect(ctx.fakeMail.list()).toHaveLength(0);
+    await conservator.post(`/api/v1/condition-reports/${report.id}/submit`, { version: withFinding.version });
+    const curatorEmail = (await ctx.store.repos.users.activeWithRole('curator'))[0]!.email;
+    const mail = await waitForMail(ctx.fakeMail, curatorEmail);
+    expect(mail.subject).toBe('Critical finding on 2019.4.12 Steam gauge');
+    expect(mail.text).toContain('Loose or detached (physical forces) on 2019.4.12 Steam gauge: Take it down before it falls.');
+  });
+});
