@@ -25,6 +25,7 @@ export const PERMISSIONS = {
   /** Every staff role reads summaries; findings and details are for the people who care for the ship. */
   conditionReport: { read: STAFF, readFindings: ['admin', 'curator', 'conservator'], create: CONSERVATOR, update: CONSERVATOR, delete: CONSERVATOR, submit: ['conservator', 'curator'], amend: CONSERVATOR },
   /** Curators log incidents too: they find vandalism on their rounds and close spaces. */
+  risk: { read: STAFF, create: CONSERVATOR, update: CONSERVATOR, delete: CONSERVATOR },
   incident: { read: STAFF, create: ['conservator', 'curator'], update: ['conservator', 'curator'] },
   media: { read: STAFF, create: ['curator', 'conservator'], update: ['curator', 'conservator'], delete: ['curator', 'conservator'] },
 } as const satisfies Record<string, Record<string, readonly Role[]>>;

@@ -3,6 +3,7 @@ import { ArtifactMoveRepository } from './repositories/artifact-move.repository.
 import { ArtifactRepository } from './repositories/artifact.repository.js';
 import { ConditionReportRepository } from './repositories/condition-report.repository.js';
 import { IncidentRepository } from './repositories/incident.repository.js';
+import { RiskRepository } from './repositories/risk.repository.js';
 import { AuditEventRepository } from './repositories/audit-event.repository.js';
 import { CompartmentRepository } from './repositories/compartment.repository.js';
 import { DeckRepository } from './repositories/deck.repository.js';
@@ -34,6 +35,7 @@ export interface Repositories {
   search: SearchIndex;
   conditionReports: ConditionReportRepository;
   incidents: IncidentRepository;
+  risks: RiskRepository;
 }
 
 function repositories(manager: EntityManager): Repositories {
@@ -54,6 +56,7 @@ function repositories(manager: EntityManager): Repositories {
     search: new SearchIndex(manager),
     conditionReports: new ConditionReportRepository(manager),
     incidents: new IncidentRepository(manager),
+    risks: new RiskRepository(manager),
   };
 }
 

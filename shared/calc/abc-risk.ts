@@ -77,12 +77,17 @@ export interface AbcRisk {
   source: string;
 }
 
+/** The priority band of a magnitude of risk (3–15). */
+export function bandOf(magnitude: number): PriorityBand {
+  return BAND_FLOORS.find(([, floor]) => magnitude >= floor)?.[0] ?? 'low';
+}
+
 export function abcRisk(a: number, b: number, c: number): AbcRisk {
   for (const [name, score] of [['A', a], ['B', b], ['C', c]] as const) {
     if (!isHalfStepScore(score)) throw new RangeError(`${name} must be between 1 and 5 in steps of 0.5.`);
   }
   const magnitude = a + b + c;
-  const band = BAND_FLOORS.find(([, floor]) => magnitude >= floor)![0];
+  const band = bandOf(magnitude);
   return { a, b, c, magnitude, band, label: PRIORITY_LABELS[band], meaning: PRIORITY_MEANINGS[band], source: ABC_SOURCE };
 }
 

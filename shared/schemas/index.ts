@@ -18,3 +18,4 @@ export * from './media.js';
 export * from './artifact-import.js';
 export * from './condition.js';
 export * from './incidents.js';
+export * from './risks.js';

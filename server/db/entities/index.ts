@@ -4,6 +4,8 @@ import { ConditionFindingEntity } from './condition-finding.entity.js';
 import { ConditionReportEntity } from './condition-report.entity.js';
 import { IncidentSubjectEntity } from './incident-subject.entity.js';
 import { IncidentEntity } from './incident.entity.js';
+import { RiskSubjectEntity } from './risk-subject.entity.js';
+import { RiskEntity } from './risk.entity.js';
 import { AuditEventEntity } from './audit-event.entity.js';
 import { CompartmentEntity } from './compartment.entity.js';
 import { DeckEntity } from './deck.entity.js';
@@ -17,6 +19,6 @@ import { SessionEntity } from './session.entity.js';
 import { UserEntity } from './user.entity.js';
 import { VesselEntity } from './vessel.entity.js';
 
-export { IncidentEntity, IncidentSubjectEntity, ConditionReportEntity, ConditionFindingEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, AuditEventEntity, CompartmentEntity, DeckEntity, HazardEntity, InvitationEntity, OrganisationSettingsEntity, PasswordResetEntity, PlanEntity, SessionEntity, UserEntity, VesselEntity };
+export { RiskEntity, RiskSubjectEntity, IncidentEntity, IncidentSubjectEntity, ConditionReportEntity, ConditionFindingEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, AuditEventEntity, CompartmentEntity, DeckEntity, HazardEntity, InvitationEntity, OrganisationSettingsEntity, PasswordResetEntity, PlanEntity, SessionEntity, UserEntity, VesselEntity };
 
-export const entities = [UserEntity, VesselEntity, OrganisationSettingsEntity, AuditEventEntity, SessionEntity, InvitationEntity, PasswordResetEntity, DeckEntity, CompartmentEntity, HazardEntity, PlanEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, ConditionReportEntity, ConditionFindingEntity, IncidentEntity, IncidentSubjectEntity];
+export const entities = [UserEntity, VesselEntity, OrganisationSettingsEntity, AuditEventEntity, SessionEntity, InvitationEntity, PasswordResetEntity, DeckEntity, CompartmentEntity, HazardEntity, PlanEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, ConditionReportEntity, ConditionFindingEntity, IncidentEntity, IncidentSubjectEntity, RiskEntity, RiskSubjectEntity];

@@ -25,6 +25,20 @@ export class ConditionReportRepository {
     return this.repo.findOneBy({ supersedesId: id });
   }
 
+  /** The latest submitted report of each compartment of a deck (its current condition). */
+  async currentOfCompartments(compartmentIds: number[]): Promise<Map<number, Pick<ConditionReportEntity, 'id' | 'grade' | 'inspectedOn'>>> {
+    const current = new Map<number, Pick<ConditionReportEntity, 'id' | 'grade' | 'inspectedOn'>>();
+    if (compartmentIds.length === 0) return current;
+    const rows = (await this.manager.query(
+      `SELECT r.subjectId AS subjectId, r.id AS id, r.grade AS grade, r.inspectedOn AS inspectedOn FROM condition_reports r
+       WHERE r.subjectType = 'compartment' AND r.status = 'submitted' AND r.subjectId IN (${compartmentIds.map(() => '?').join(', ')})
+       AND r.id = (SELECT r2.id FROM condition_reports r2 WHERE r2.subjectType = 'compartment' AND r2.subjectId = r.subjectId AND r2.status = 'submitted' ORDER BY r2.inspectedOn DESC, r2.id DESC LIMIT 1)`,
+      compartmentIds,
+    )) as { subjectId: number; id: number; grade: ConditionReportEntity['grade']; inspectedOn: string }[];
+    for (const row of rows) current.set(Number(row.subjectId), { id: Number(row.id), grade: row.grade, inspectedOn: row.inspectedOn });
+    return current;
+  }
+
   async page(query: ConditionReportsQuery) {
     const qb = this.repo.createQueryBuilder('report').leftJoinAndSelect('report.surveyor', 'surveyor');
     if (query.vesselId) qb.andWhere('report.vesselId = :vesselId', { vesselId: query.vesselId });

@@ -1,0 +1,62 @@
+import { In, type EntityManager } from 'typeorm';
+import type { RisksQuery } from '../../../shared/schemas/risks.js';
+import { RiskSubjectEntity } from '../entities/risk-subject.entity.js';
+import { RiskEntity } from '../entities/risk.entity.js';
+import { pageOf } from './paging.js';
+
+export class RiskRepository {
+  constructor(private readonly manager: EntityManager) {}
+
+  private get repo() {
+    return this.manager.getRepository(RiskEntity);
+  }
+
+  private get subjects() {
+    return this.manager.getRepository(RiskSubjectEntity);
+  }
+
+  findById(id: number) {
+    return this.repo.findOneBy({ id });
+  }
+
+  page(query: RisksQuery) {
+    const qb = this.repo.createQueryBuilder('risk').where('risk.vesselId = :vesselId', { vesselId: query.vesselId });
+    if (query.agent) qb.andWhere('risk.agent = :agent', { agent: query.agent });
+    if (query.status) qb.andWhere('risk.status = :status', { status: query.status });
+    if (query.band) qb.andWhere('risk.band = :band', { band: query.band });
+    if (query.compartmentId) qb.andWhere("EXISTS (SELECT 1 FROM risk_subjects s WHERE s.riskId = risk.id AND s.subjectType = 'compartment' AND s.subjectId = :compartmentId)", { compartmentId: query.compartmentId });
+    if (query.deckId) qb.andWhere('EXISTS (SELECT 1 FROM risk_subjects s WHERE s.riskId = risk.id AND s.deckId = :deckId)', { deckId: query.deckId });
+    return pageOf(qb, query, 'id', 'ASC');
+  }
+
+  subjectsOf(riskIds: number[]) {
+    return riskIds.length ? this.subjects.find({ where: { riskId: In(riskIds) } }) : Promise.resolve([]);
+  }
+
+  create(fields: Partial<RiskEntity>) {
+    return this.repo.save(this.repo.create(fields));
+  }
+
+  save(risk: RiskEntity) {
+    return this.repo.save(risk);
+  }
+
+  async setSubjects(riskId: number, subjects: Omit<RiskSubjectEntity, 'riskId' | 'risk'>[]) {
+    await this.subjects.delete({ riskId });
+    if (subjects.length) await this.subjects.save(subjects.map((s) => this.subjects.create({ ...s, riskId })));
+  }
+
+  async remove(id: number) {
+    await this.subjects.delete({ riskId: id });
+    await this.repo.delete({ id });
+  }
+
+  /** Per compartment of a deck: its open risks and the largest MR among them. */
+  async openRisksOnDeck(deckId: number): Promise<Map<number, { count: number; maxMagnitude: number }>> {
+    const rows = (await this.manager.query(
+      `SELECT s.subjectId AS compartmentId, COUNT(*) AS n, MAX(r.magnitude) AS mr FROM risk_subjects s JOIN risks r ON r.id = s.riskId WHERE s.subjectType = 'compartment' AND s.deckId = ? AND r.status = 'open' GROUP BY s.subjectId`,
+      [deckId],
+    )) as { compartmentId: number; n: number; mr: number }[];
+    return new Map(rows.map((row) => [Number(row.compartmentId), { count: Number(row.n), maxMagnitude: Number(row.mr) }]));
+  }
+}
