@@ -1,3 +1,5 @@
+import type { CreateIncidentBody, Incident, IncidentsQuery, UpdateIncidentBody } from '@shared/schemas/incidents';
+import type { CreateRiskBody, DeckConditionOverlay, Risk, RisksQuery, UpdateRiskBody } from '@shared/schemas/risks';
 import type { ConditionReport, ConditionReportsQuery, CreateConditionReportBody, CreateFindingBody, UpdateConditionReportBody, UpdateFindingBody } from '@shared/schemas/condition';
 import type { Page } from '@shared/schemas/common';
 import type { ConditionReportSummary } from '@shared/schemas/condition';
@@ -13,3 +15,15 @@ export const amendReport = (id: number) => api.post<ConditionReport>(`/condition
 export const addFinding = (reportId: number, body: CreateFindingBody) => api.post<ConditionReport>(`/condition-reports/${reportId}/findings`, body);
 export const updateFinding = (reportId: number, findingId: number, body: UpdateFindingBody) => api.patch<ConditionReport>(`/condition-reports/${reportId}/findings/${findingId}`, body);
 export const removeFinding = (reportId: number, findingId: number) => api.delete<ConditionReport>(`/condition-reports/${reportId}/findings/${findingId}`);
+
+export const listIncidents = (params: Partial<IncidentsQuery> & { vesselId: number }) => api.get<Page<Incident>>('/incidents', params);
+export const getIncident = (id: number) => api.get<Incident>(`/incidents/${id}`);
+export const createIncident = (body: CreateIncidentBody) => api.post<Incident>('/incidents', body);
+export const updateIncident = (id: number, body: UpdateIncidentBody) => api.patch<Incident>(`/incidents/${id}`, body);
+
+export const listRisks = (params: Partial<RisksQuery> & { vesselId: number }) => api.get<Page<Risk>>('/risks', params);
+export const getRisk = (id: number) => api.get<Risk>(`/risks/${id}`);
+export const createRisk = (body: CreateRiskBody) => api.post<Risk>('/risks', body);
+export const updateRisk = (id: number, body: UpdateRiskBody) => api.patch<Risk>(`/risks/${id}`, body);
+export const deleteRisk = (id: number) => api.delete<void>(`/risks/${id}`);
+export const getDeckCondition = (deckId: number) => api.get<DeckConditionOverlay>(`/decks/${deckId}/condition`);
