@@ -114,7 +114,7 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
   artifactImportRoutes(api, new ArtifactImportService(store), { incomingDir: files.incoming });
   artifactRoutes(api, new ArtifactService(store));
   const alerts = new ConditionAlerts(store, mailer, config);
-  const conditionReports = new ConditionReportService(store, alerts);
+  const conditionReports = new ConditionReportService(store, alerts, files);
   conditionReportRoutes(api, conditionReports);
   incidentRoutes(api, new IncidentService(store, conditionReports, alerts));
   riskRoutes(api, new RiskService(store));

@@ -45,6 +45,23 @@ export function conditionReportRoutes(api: ApiRouter, reports: ConditionReportSe
   });
 
   api.route({
+    method: 'get',
+    path: '/condition-reports/:id/pdf',
+    tag,
+    summary: 'The report as a PDF with its findings and photos, to send to a grant maker or an insurer',
+    access: allowed('conditionReport', 'readFindings'),
+    params: idParam,
+    produces: 'application/pdf',
+    errors: [404],
+    handler: async ({ params, res }) => {
+      const { pdf, fileName } = await reports.pdf(params.id);
+      res.setHeader('Content-Type', 'application/pdf');
+      res.setHeader('Content-Disposition', `attachment; filename="${fileName}"`);
+      res.end(pdf);
+    },
+  });
+
+  api.route({
     method: 'patch',
     path: '/condition-reports/:id',
     tag,

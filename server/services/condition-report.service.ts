@@ -9,7 +9,10 @@ import { ConflictError, NotFoundError, UnprocessableError } from '../http/errors
 import { presentReport, presentReportSummary } from '../presenters/condition-report.presenter.js';
 import type { SearchDocument } from '../search/search-index.js';
 import { changesBetween, recordAudit, type Actor } from './audit.service.js';
+import type { FileStore } from '../storage/file-store.js';
 import type { ConditionAlerts } from './condition-alerts.js';
+import { conditionReportPdf, type PdfPhoto } from './condition-report-pdf.js';
+import { derivativeFile } from './media-derivatives.js';
 import { staleEditError } from './stale-edit.js';
 
 const REPORT_FIELDS: (keyof ConditionReportEntity)[] = ['inspectedOn', 'method', 'temperatureC', 'relativeHumidity', 'summary', 'gradeOverride', 'overrideReason'];
@@ -29,7 +32,7 @@ const SUBMITTED = 'This report is submitted and signed, so it no longer changes.
  * 409 for a stale save reads to say what changed.
  */
 export class ConditionReportService {
-  constructor(private readonly store: Store, private readonly alerts: ConditionAlerts) {}
+  constructor(private readonly store: Store, private readonly alerts: ConditionAlerts, private readonly files: FileStore) {}
 
   private async subjectOf(repos: Repositories, type: 'artifact' | 'compartment', id: number): Promise<Subject> {
     if (type === 'artifact') {
@@ -84,6 +87,40 @@ export class ConditionReportService {
     if (report.status !== 'draft') throw new ConflictError(SUBMITTED, { status: 'submitted' });
     if (version !== null && report.version !== version) throw await staleEditError(repos, 'condition-report', id, 'this report', report.version, version);
     return report;
+  }
+
+  /** The report as a PDF with its findings and photos (its own, and those its findings are marked on). */
+  async pdf(id: number): Promise<{ pdf: Buffer; fileName: string }> {
+    const repos = this.store.repos;
+    const report = await repos.conditionReports.findById(id);
+    if (!report) throw new NotFoundError('The condition report');
+    const [subject, findings, vessel, settings] = [
+      await this.subjectOf(repos, report.subjectType, report.subjectId),
+      await repos.conditionReports.findings(id),
+      await repos.vessels.findById(report.vesselId),
+      await repos.settings.get(),
+    ];
+    const mediaIds = new Set((await repos.media.forOwner('condition-report', id)).filter((m) => m.kind === 'photo').map((m) => m.id));
+    for (const f of findings) if (f.location?.on === 'photo') mediaIds.add(f.location.mediaId);
+    const photos: PdfPhoto[] = [];
+    for (const mediaId of mediaIds) {
+      const media = await repos.media.findById(mediaId);
+      if (!media || media.kind !== 'photo') continue;
+      const marked = findings.map((f, i) => (f.location?.on === 'photo' && f.location.mediaId === mediaId ? i + 1 : null)).filter((n) => n !== null);
+      const caption = [media.caption || media.fileName, media.credit && `Photo: ${media.credit}`, media.takenAt && `taken ${media.takenAt.replace('T', ' ')}`, marked.length ? `finding ${marked.join(', ')}` : null].filter(Boolean).join(' · ');
+      photos.push({ file: derivativeFile(this.files.path(media.storageKey), 'display'), caption });
+    }
+    const pdf = await conditionReportPdf({
+      organisationName: settings.organisationName,
+      vesselName: vessel?.name ?? '',
+      subjectLabel: subject.label,
+      report,
+      surveyorName: report.surveyor?.name ?? null,
+      supersededById: await this.supersededBy(repos, id),
+      findings,
+      photos,
+    });
+    return { pdf, fileName: `condition-report-${id}-rev${report.revision}.pdf` };
   }
 
   async list(query: ConditionReportsQuery) {

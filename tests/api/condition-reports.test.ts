@@ -169,3 +169,41 @@ describe('photos of a report', () => {
     expect(moved.status).toBe(200);
   });
 });
+
+describe('the report as a PDF', () => {
+  it('holds the record, the grade, every finding with its rust grade, and the photos', async () => {
+    const { cameraJpeg } = await import('../support/images.js');
+    const { extractText, getDocumentProxy } = await import('unpdf');
+    const report = await draft();
+    const photo = (await conservator.agent.post(`/api/v1/media?ownerType=condition-report&ownerId=${report.id}`).set('x-csrf-token', conservator.csrf).attach('file', await cameraJpeg(), 'deckhead.jpg')).body;
+    await conservator.patch(`/api/v1/media/${photo.id}`, { caption: 'Deckhead over the store', version: photo.version });
+    await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { ...coating, location: { on: 'photo', mediaId: photo.id, area: [0.1, 0.1, 0.2, 0.2] } });
+    const last = await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { artifactId: gaugeId, agent: 'thieves-and-vandals', damageType: 'graffiti', severity: 'slight', description: 'Initials scratched in the paint' });
+    await curator.post(`/api/v1/condition-reports/${report.id}/submit`, { version: last.body.version });
+
+    const res = await curator.get(`/api/v1/condition-reports/${report.id}/pdf`).buffer(true).parse((r, done) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (c: Buffer) => chunks.push(c));
+      r.on('end', () => done(null, Buffer.concat(chunks)));
+    });
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toBe('application/pdf');
+    expect(res.headers['content-disposition']).toBe(`attachment; filename="condition-report-${report.id}-rev1.pdf"`);
+    const pdf = await getDocumentProxy(new Uint8Array(res.body as Buffer));
+    expect(pdf.numPages).toBe(2);
+    const { text } = await extractText(pdf, { mergePages: true });
+    const flat = text.replace(/\s+/g, ' ');
+    expect(flat).toContain('Condition report: 1-10-1-Q Store room');
+    expect(flat).toContain('Overall condition: Fair');
+    expect(flat).toContain('1. Coating failure: Moderate');
+    expect(flat).toContain('Rust grade (ASTM D610): 5-G: 2 % rusted (more than 1 % up to 3 %), general rusting');
+    expect(flat).toContain('Recommended action: Spot-prime and overcoat');
+    expect(flat).toContain('2. Graffiti: Slight');
+    expect(flat).toContain('Artifact: 2019.4.12 Steam gauge');
+    expect(flat).toContain('Deckhead over the store');
+    expect(flat).toMatch(/Submitted and signed by Test curator \d+/);
+
+    const docent = (await signedInAs(ctx.app, ctx.store, 'docent')).client;
+    expect((await docent.get(`/api/v1/condition-reports/${report.id}/pdf`)).status).toBe(403);
+  });
+});
