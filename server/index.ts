@@ -4,6 +4,7 @@ import { openDatabase } from './db/data-source.js';
 import { seedDemo } from './db/seed/seed.js';
 import { seedDemoPlans } from './db/seed/seed-plans.js';
 import { seedDemoCollection } from './db/seed/seed-collection.js';
+import { seedDemoCondition } from './db/seed/seed-condition.js';
 import { DEMO_PASSWORD, DEMO_USERS } from './db/seed/demo-data.js';
 import { FakeMailServer } from './fakes/mail-server.js';
 
@@ -27,6 +28,7 @@ if (!config.mail.host) {
 if (config.seedOnStart && (await seedDemo(dataSource, { bcryptCost: config.bcryptCost }))) {
   await seedDemoPlans(dataSource, config);
   await seedDemoCollection(dataSource, config);
+  await seedDemoCondition(dataSource, config);
   console.log(`Demo data seeded. Sign in as ${DEMO_USERS.map((u) => u.email).join(', ')} with the password "${DEMO_PASSWORD}".`);
 }
 

@@ -3,6 +3,8 @@ import { clearData, seedDemo, SeedRefused } from '../../server/db/seed/seed.js';
 import { seedDemoPlans } from '../../server/db/seed/seed-plans.js';
 import { seedDemoCollection } from '../../server/db/seed/seed-collection.js';
 import { DEMO_ARTIFACTS } from '../../server/db/seed/demo-collection.js';
+import { DEMO_REPORTS, DEMO_RISKS } from '../../server/db/seed/demo-condition.js';
+import { seedDemoCondition } from '../../server/db/seed/seed-condition.js';
 import { signedInAs } from '../support/http.js';
 import { DEMO_COMPARTMENTS } from '../../server/db/seed/demo-ship-map.js';
 import { DEMO_PASSWORD, DEMO_USERS } from '../../server/db/seed/demo-data.js';
@@ -78,6 +80,23 @@ describe('demo seed', () => {
     const photo = (await client.get(`/api/v1/media?ownerType=artifact&ownerId=${withPhotos[0].id}`)).body[0];
     expect(photo).toMatchObject({ kind: 'photo', width: 1200, height: 900, takenAt: expect.stringMatching(/^\d{4}-\d\d-\d\dT/) });
     expect((await client.get(`/api/v1/vessels/${vessel.id}/artifacts?q=gauge`)).body.total).toBeGreaterThanOrEqual(3);
+
+    await seedDemoCondition(ctx.dataSource, ctx.config);
+    const reports = (await client.get(`/api/v1/condition-reports?vesselId=${vessel.id}&pageSize=100`)).body;
+    // One per demo survey, the amendment of one of them, and the drafts the two incidents opened (three affected items).
+    expect(reports.total).toBe(DEMO_REPORTS.length + 1 + 3);
+    expect(reports.items.filter((r: { status: string }) => r.status === 'draft')).toHaveLength(1 + 3);
+    expect(reports.items.filter((r: { supersededById: number | null }) => r.supersededById)).toHaveLength(1);
+    const incidents = (await client.get(`/api/v1/incidents?vesselId=${vessel.id}`)).body.items;
+    expect(incidents.map((i: { kind: string }) => i.kind).sort()).toEqual(['vandalism', 'water-ingress']);
+    const purser = (await client.get(`/api/v1/vessels/${vessel.id}/compartments?q=purser`)).body.items[0];
+    expect(purser.accessStatus).toBe('staff-only');
+    const register = (await client.get(`/api/v1/risks?vesselId=${vessel.id}&pageSize=100`)).body;
+    expect(register.total).toBe(DEMO_RISKS.length);
+    expect(register.items[0].magnitude).toBeGreaterThanOrEqual(register.items[1].magnitude);
+    const second = (await client.get(`/api/v1/vessels/${vessel.id}/decks`)).body.find((d: { name: string }) => d.name === 'Second deck');
+    const overlay = (await client.get(`/api/v1/decks/${second.id}/condition`)).body.compartments;
+    expect(overlay.filter((c: { grade: string | null }) => c.grade).length).toBeGreaterThanOrEqual(3);
   });
 
   it('refuses to run when NODE_ENV=production', async () => {

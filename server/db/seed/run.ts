@@ -4,6 +4,7 @@ import { openDatabase } from '../data-source.js';
 import { clearData, seedDemo } from './seed.js';
 import { seedDemoPlans } from './seed-plans.js';
 import { seedDemoCollection } from './seed-collection.js';
+import { seedDemoCondition } from './seed-condition.js';
 import { FileStore } from '../../storage/file-store.js';
 
 const config = loadConfig();
@@ -15,6 +16,7 @@ try {
   await seedDemo(dataSource, { bcryptCost: config.bcryptCost });
   await seedDemoPlans(dataSource, config);
   await seedDemoCollection(dataSource, config);
+  await seedDemoCondition(dataSource, config);
   await dataSource.destroy();
   console.log(`Demo data written to ${config.databasePath}.`);
 } catch (err) {
