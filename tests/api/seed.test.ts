@@ -97,6 +97,11 @@ describe('demo seed', () => {
     const second = (await client.get(`/api/v1/vessels/${vessel.id}/decks`)).body.find((d: { name: string }) => d.name === 'Second deck');
     const overlay = (await client.get(`/api/v1/decks/${second.id}/condition`)).body.compartments;
     expect(overlay.filter((c: { grade: string | null }) => c.grade).length).toBeGreaterThanOrEqual(3);
+
+    // `npm run seed` empties all of it (an amendment refers to the report it supersedes) and starts over.
+    await clearData(ctx.dataSource);
+    const [{ n }] = await ctx.dataSource.query('SELECT COUNT(*) AS n FROM condition_reports');
+    expect(n).toBe(0);
   });
 
   it('refuses to run when NODE_ENV=production', async () => {

@@ -51,6 +51,8 @@ export async function seedDemo(dataSource: DataSource, options: { bcryptCost: nu
 export async function clearData(dataSource: DataSource): Promise<void> {
   if (process.env.NODE_ENV === 'production') throw new SeedRefused('Refusing to clear data when NODE_ENV=production.');
   await dataSource.transaction(async (manager) => {
+    // A RESTRICT reference within one table is checked row by row: undo it before emptying the table.
+    await manager.query('UPDATE condition_reports SET supersedesId = NULL');
     for (const entity of [...dataSource.entityMetadatas].reverse()) {
       await manager.createQueryBuilder().delete().from(entity.target).execute();
     }
