@@ -3,7 +3,7 @@ import type { CreateRiskBody, DeckConditionOverlay, Risk, RisksQuery, UpdateRisk
 import type { ConditionReport, ConditionReportsQuery, CreateConditionReportBody, CreateFindingBody, UpdateConditionReportBody, UpdateFindingBody } from '@shared/schemas/condition';
 import type { Page } from '@shared/schemas/common';
 import type { ConditionReportSummary } from '@shared/schemas/condition';
-import { api } from './client';
+import { api, apiUrl } from './client';
 
 export const listReports = (params: Partial<ConditionReportsQuery>) => api.get<Page<ConditionReportSummary>>('/condition-reports', params);
 export const getReport = (id: number) => api.get<ConditionReport>(`/condition-reports/${id}`);
@@ -14,6 +14,8 @@ export const submitReport = (id: number, version: number) => api.post<ConditionR
 export const amendReport = (id: number) => api.post<ConditionReport>(`/condition-reports/${id}/amend`);
 export const addFinding = (reportId: number, body: CreateFindingBody) => api.post<ConditionReport>(`/condition-reports/${reportId}/findings`, body);
 export const updateFinding = (reportId: number, findingId: number, body: UpdateFindingBody) => api.patch<ConditionReport>(`/condition-reports/${reportId}/findings/${findingId}`, body);
+/** Link that downloads the report as a PDF. */
+export const reportPdfUrl = (id: number) => apiUrl(`/condition-reports/${id}/pdf`);
 export const removeFinding = (reportId: number, findingId: number) => api.delete<ConditionReport>(`/condition-reports/${reportId}/findings/${findingId}`);
 
 export const listIncidents = (params: Partial<IncidentsQuery> & { vesselId: number }) => api.get<Page<Incident>>('/incidents', params);
