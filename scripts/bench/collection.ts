@@ -2,7 +2,6 @@
 // media records into a fresh database, starts the real server on it, and times from outside
 // (over HTTP, one request at a time) 500 list requests (page of 50, sorted and filtered) and 500
 // full-text searches, as p50 and p95; then the photo derivatives made per second.
-import { spawn } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
@@ -16,11 +15,11 @@ import { ArtifactEntity } from '../../server/db/entities/artifact.entity.js';
 import { SearchIndex } from '../../server/search/search-index.js';
 import { searchDocumentOf } from '../../server/services/artifact.service.js';
 import { makeDerivatives } from '../../server/services/media-derivatives.js';
+import { BENCH_EMAIL, BENCH_PASSWORD, signIn, startServer, time } from './http-bench.js';
 
 const ARTIFACTS = 10_000;
 const MEDIA = 30_000;
 const REQUESTS = 500;
-const PASSWORD = 'bench-only-password-not-secret';
 
 // A small deterministic generator, so every run measures the same data.
 let state = 42;
@@ -40,10 +39,10 @@ function sentence(words: number): string {
 async function seed(databasePath: string) {
   const dataSource = await openDatabase(databasePath);
   const db = (dataSource.driver as unknown as { databaseConnection: Database }).databaseConnection;
-  const passwordHash = await hashPassword(PASSWORD, 4);
+  const passwordHash = await hashPassword(BENCH_PASSWORD, 4);
   const started = Date.now();
   db.transaction(() => {
-    db.prepare(`INSERT INTO users (email, name, role, passwordHash, status, createdAt, updatedAt, version) VALUES ('bench@example.test', 'Bench Curator', 'curator', ?, 'active', datetime('now'), datetime('now'), 1)`).run(passwordHash);
+    db.prepare(`INSERT INTO users (email, name, role, passwordHash, status, createdAt, updatedAt, version) VALUES (?, 'Bench Curator', 'curator', ?, 'active', datetime('now'), datetime('now'), 1)`).run(BENCH_EMAIL, passwordHash);
     const vesselId = db.prepare(`INSERT INTO vessels (name, vesselType, builtYear, berth, summary, designationScheme, createdAt, updatedAt, version) VALUES ('Bench vessel', 'Steamer', 1912, '', '', 'free-text', datetime('now'), datetime('now'), 1)`).run().lastInsertRowid;
     const deckIds: number[] = [];
     for (let d = 0; d < 4; d++) {
@@ -92,52 +91,6 @@ async function seed(databasePath: string) {
   });
   await dataSource.destroy();
   return (Date.now() - started) / 1000;
-}
-
-function percentile(sorted: number[], p: number) {
-  return sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)]!;
-}
-
-async function startServer(dataDir: string, port: number) {
-  const child = spawn('node_modules/.bin/tsx', ['--tsconfig', 'tsconfig.node.json', 'server/index.ts'], {
-    env: { ...process.env, PORT: String(port), DATA_DIR: dataDir, SEED_ON_START: 'false', FAKE_SMTP_PORT: '0' },
-    stdio: ['ignore', 'pipe', 'pipe'],
-  });
-  let output = '';
-  child.stdout.on('data', (d) => (output += d));
-  child.stderr.on('data', (d) => (output += d));
-  const started = Date.now();
-  while (Date.now() - started < 60_000) {
-    if (await fetch(`http://127.0.0.1:${port}/api/v1/health`).then((r) => r.ok, () => false)) return child;
-    if (child.exitCode !== null) break;
-    await new Promise((r) => setTimeout(r, 200));
-  }
-  child.kill();
-  throw new Error(`The server did not start:\n${output}`);
-}
-
-async function signIn(base: string) {
-  const csrfRes = await fetch(`${base}/api/v1/auth/csrf`);
-  const cookie = csrfRes.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
-  const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
-  const res = await fetch(`${base}/api/v1/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json', 'x-csrf-token': csrfToken, cookie }, body: JSON.stringify({ email: 'bench@example.test', password: PASSWORD }) });
-  if (!res.ok) throw new Error(`sign-in failed: ${res.status} ${await res.text()}`);
-  return res.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
-}
-
-async function time(base: string, cookie: string, urls: string[]) {
-  const ms: number[] = [];
-  let results = 0;
-  for (const url of urls) {
-    const started = process.hrtime.bigint();
-    const res = await fetch(`${base}${url}`, { headers: { cookie, accept: 'application/json' } });
-    const body = (await res.json()) as { total: number };
-    ms.push(Number(process.hrtime.bigint() - started) / 1e6);
-    if (!res.ok) throw new Error(`${url}: ${res.status} ${JSON.stringify(body)}`);
-    results += body.total > 0 ? 1 : 0;
-  }
-  ms.sort((a, b) => a - b);
-  return { p50: percentile(ms, 50), p95: percentile(ms, 95), max: ms[ms.length - 1]!, withResults: results };
 }
 
 async function derivatives(dir: string) {

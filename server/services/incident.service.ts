@@ -31,17 +31,11 @@ export class IncidentService {
 
   private async present(incident: IncidentEntity, subjects: IncidentSubjectEntity[]): Promise<Incident> {
     const repos = this.store.repos;
-    const artifacts = [];
-    const compartments = [];
-    for (const s of subjects.filter((x) => x.incidentId === incident.id)) {
-      if (s.subjectType === 'artifact') {
-        const a = await repos.artifacts.findById(s.subjectId);
-        artifacts.push({ id: s.subjectId, label: a ? `${a.objectNumber} ${a.name}` : `Artifact ${s.subjectId}` });
-      } else {
-        const c = await repos.compartments.findById(s.subjectId);
-        compartments.push({ id: s.subjectId, label: c ? `${c.designation} ${c.name}` : `Compartment ${s.subjectId}` });
-      }
-    }
+    const mine = subjects.filter((x) => x.incidentId === incident.id);
+    const artifactLabels = await repos.artifacts.labels(mine.filter((s) => s.subjectType === 'artifact').map((s) => s.subjectId));
+    const compartmentLabels = await repos.compartments.labels(mine.filter((s) => s.subjectType === 'compartment').map((s) => s.subjectId));
+    const artifacts = mine.filter((s) => s.subjectType === 'artifact').map((s) => ({ id: s.subjectId, label: artifactLabels.get(s.subjectId) ?? `Artifact ${s.subjectId}` }));
+    const compartments = mine.filter((s) => s.subjectType === 'compartment').map((s) => ({ id: s.subjectId, label: compartmentLabels.get(s.subjectId)?.label ?? `Compartment ${s.subjectId}` }));
     return {
       id: incident.id,
       vesselId: incident.vesselId,

@@ -58,19 +58,14 @@ export class RiskService {
     const repos = this.store.repos;
     const subjects = await repos.risks.subjectsOf(risks.map((r) => r.id));
     const out: Risk[] = [];
+    const compartmentLabels = await repos.compartments.labels(subjects.filter((s) => s.subjectType === 'compartment').map((s) => s.subjectId));
+    const artifactLabels = await repos.artifacts.labels(subjects.filter((s) => s.subjectType === 'artifact').map((s) => s.subjectId));
     for (const risk of risks) {
       const mine = subjects.filter((s) => s.riskId === risk.id);
-      const artifacts = [];
-      const compartments = [];
-      for (const s of mine) {
-        if (s.subjectType === 'artifact') {
-          const a = await repos.artifacts.findById(s.subjectId);
-          artifacts.push({ id: s.subjectId, label: a ? `${a.objectNumber} ${a.name}` : `Artifact ${s.subjectId}` });
-        } else {
-          const c = await repos.compartments.findById(s.subjectId);
-          compartments.push({ id: s.subjectId, label: c ? `${c.designation} ${c.name}` : `Compartment ${s.subjectId}`, deckId: c?.deckId ?? 0 });
-        }
-      }
+      const artifacts = mine.filter((s) => s.subjectType === 'artifact').map((s) => ({ id: s.subjectId, label: artifactLabels.get(s.subjectId) ?? `Artifact ${s.subjectId}` }));
+      const compartments = mine
+        .filter((s) => s.subjectType === 'compartment')
+        .map((s) => ({ id: s.subjectId, label: compartmentLabels.get(s.subjectId)?.label ?? `Compartment ${s.subjectId}`, deckId: compartmentLabels.get(s.subjectId)?.deckId ?? 0 }));
       out.push({
         id: risk.id,
         vesselId: risk.vesselId,

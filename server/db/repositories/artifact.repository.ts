@@ -49,6 +49,13 @@ export class ArtifactRepository {
     return taken;
   }
 
+  /** Object number and name of the given artifacts, in one query (labels in lists). */
+  async labels(ids: number[]): Promise<Map<number, string>> {
+    if (ids.length === 0) return new Map();
+    const rows = await this.repo.createQueryBuilder('a').select(['a.id', 'a.objectNumber', 'a.name']).where('a.id IN (:...ids)', { ids: [...new Set(ids)] }).getMany();
+    return new Map(rows.map((a) => [a.id, `${a.objectNumber} ${a.name}`]));
+  }
+
   countInCompartment(compartmentId: number) {
     return this.repo.countBy({ compartmentId });
   }

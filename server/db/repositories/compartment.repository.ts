@@ -24,6 +24,13 @@ export class CompartmentRepository {
     return this.repo.createQueryBuilder('c').where('c.deckId = :deckId', { deckId }).andWhere('c.outline IS NOT NULL').getMany();
   }
 
+  /** Designation, name and deck of the given compartments, in one query (labels in lists). */
+  async labels(ids: number[]): Promise<Map<number, { label: string; deckId: number }>> {
+    if (ids.length === 0) return new Map();
+    const rows = await this.repo.createQueryBuilder('c').select(['c.id', 'c.designation', 'c.name', 'c.deckId']).where('c.id IN (:...ids)', { ids: [...new Set(ids)] }).getMany();
+    return new Map(rows.map((c) => [c.id, { label: `${c.designation} ${c.name}`, deckId: c.deckId }]));
+  }
+
   countOnDeck(deckId: number) {
     return this.repo.countBy({ deckId });
   }

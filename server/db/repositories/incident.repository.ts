@@ -24,7 +24,7 @@ export class IncidentRepository {
     if (query.kind) qb.andWhere('incident.kind = :kind', { kind: query.kind });
     for (const [type, id] of [['artifact', query.artifactId], ['compartment', query.compartmentId]] as const) {
       if (!id) continue;
-      qb.andWhere(`EXISTS (SELECT 1 FROM incident_subjects s WHERE s.incidentId = incident.id AND s.subjectType = :${type}Type AND s.subjectId = :${type}Id)`, { [`${type}Type`]: type, [`${type}Id`]: id });
+      qb.andWhere(`incident.id IN (SELECT s.incidentId FROM incident_subjects s WHERE s.subjectType = :${type}Type AND s.subjectId = :${type}Id)`, { [`${type}Type`]: type, [`${type}Id`]: id });
     }
     return pageOf(qb, query);
   }

@@ -24,8 +24,9 @@ export class RiskRepository {
     if (query.agent) qb.andWhere('risk.agent = :agent', { agent: query.agent });
     if (query.status) qb.andWhere('risk.status = :status', { status: query.status });
     if (query.band) qb.andWhere('risk.band = :band', { band: query.band });
-    if (query.compartmentId) qb.andWhere("EXISTS (SELECT 1 FROM risk_subjects s WHERE s.riskId = risk.id AND s.subjectType = 'compartment' AND s.subjectId = :compartmentId)", { compartmentId: query.compartmentId });
-    if (query.deckId) qb.andWhere('EXISTS (SELECT 1 FROM risk_subjects s WHERE s.riskId = risk.id AND s.deckId = :deckId)', { deckId: query.deckId });
+    // IN (subquery) runs the subquery once; a correlated EXISTS would scan a deck's links for every risk.
+    if (query.compartmentId) qb.andWhere("risk.id IN (SELECT s.riskId FROM risk_subjects s WHERE s.subjectType = 'compartment' AND s.subjectId = :compartmentId)", { compartmentId: query.compartmentId });
+    if (query.deckId) qb.andWhere('risk.id IN (SELECT s.riskId FROM risk_subjects s WHERE s.deckId = :deckId)', { deckId: query.deckId });
     return pageOf(qb, query, 'id', 'ASC');
   }
 
