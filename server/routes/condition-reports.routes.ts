@@ -1,5 +1,5 @@
 import { idParam } from '../../shared/schemas/common.js';
-import { conditionReport, conditionReportPage, conditionReportsQuery, createConditionReportBody, createFindingBody, reportFindingParams, updateConditionReportBody, updateFindingBody, versionBody } from '../../shared/schemas/condition.js';
+import { conditionHistory, conditionReport, conditionReportPage, historyQuery, conditionReportsQuery, createConditionReportBody, createFindingBody, reportFindingParams, updateConditionReportBody, updateFindingBody, versionBody } from '../../shared/schemas/condition.js';
 import type { ApiRouter } from '../http/api-router.js';
 import { allowed } from '../http/access.js';
 import { actorOf } from '../services/audit.service.js';
@@ -17,6 +17,18 @@ export function conditionReportRoutes(api: ApiRouter, reports: ConditionReportSe
     query: conditionReportsQuery,
     response: conditionReportPage,
     handler: ({ query }) => reports.list(query),
+  });
+
+  api.route({
+    method: 'get',
+    path: '/condition-history',
+    tag,
+    summary: "An artifact's or compartment's reports and incidents over time, with grades, and its photos by date for comparison",
+    access: allowed('conditionReport', 'read'),
+    query: historyQuery,
+    response: conditionHistory,
+    errors: [404],
+    handler: ({ query }) => reports.history(query.subjectType, query.subjectId),
   });
 
   api.route({

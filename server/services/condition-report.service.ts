@@ -7,6 +7,7 @@ import type { ConditionReportEntity } from '../db/entities/condition-report.enti
 import type { Repositories, Store } from '../db/store.js';
 import { ConflictError, NotFoundError, UnprocessableError } from '../http/errors.js';
 import { presentReport, presentReportSummary } from '../presenters/condition-report.presenter.js';
+import { mediaUrl } from '../presenters/media.presenter.js';
 import type { SearchDocument } from '../search/search-index.js';
 import { changesBetween, recordAudit, type Actor } from './audit.service.js';
 import type { FileStore } from '../storage/file-store.js';
@@ -121,6 +122,32 @@ export class ConditionReportService {
       photos,
     });
     return { pdf, fileName: `condition-report-${id}-rev${report.revision}.pdf` };
+  }
+
+  /** A subject's reports and incidents over time, and its photos (its own and its reports') by date. */
+  async history(subjectType: 'artifact' | 'compartment', subjectId: number) {
+    const repos = this.store.repos;
+    const subject = await this.subjectOf(repos, subjectType, subjectId).catch(() => {
+      throw new NotFoundError(subjectType === 'artifact' ? 'The artifact' : 'The compartment');
+    });
+    const reports = await repos.conditionReports.forSubject(subjectType, subjectId);
+    const incidents = await repos.incidents.forSubject(subjectType, subjectId);
+    const supersededBy = new Map(reports.filter((r) => r.supersedesId && r.status === 'submitted').map((r) => [r.supersedesId!, r.id]));
+    const entries = [
+      ...reports.map((r) => ({ kind: 'report' as const, id: r.id, date: r.inspectedOn, grade: r.grade, status: r.status, revision: r.revision, supersededById: supersededBy.get(r.id) ?? null, summary: r.summary, findingCount: r.findingCount })),
+      ...incidents.map((i) => ({ kind: 'incident' as const, id: i.id, date: i.foundOn, title: i.title, incidentKind: i.kind })),
+    ].sort((a, b) => b.date.localeCompare(a.date) || b.id - a.id);
+    const photos = [];
+    const owned = [{ ownerType: subjectType, ownerId: subjectId, report: null as (typeof reports)[number] | null }, ...reports.map((r) => ({ ownerType: 'condition-report' as const, ownerId: r.id, report: r }))];
+    for (const owner of owned) {
+      for (const media of await repos.media.forOwner(owner.ownerType, owner.ownerId)) {
+        if (media.kind !== 'photo') continue;
+        const date = media.takenAt?.slice(0, 10) ?? owner.report?.inspectedOn ?? media.createdAt.toISOString().slice(0, 10);
+        photos.push({ mediaId: media.id, date, thumbUrl: mediaUrl(media.id, 'thumb'), displayUrl: mediaUrl(media.id, 'display'), caption: media.caption, altText: media.altText, reportId: owner.report?.id ?? null });
+      }
+    }
+    photos.sort((a, b) => b.date.localeCompare(a.date) || b.mediaId - a.mediaId);
+    return { subjectLabel: subject.label, entries, photos };
   }
 
   async list(query: ConditionReportsQuery) {

@@ -230,3 +230,34 @@ export type UpdateConditionReportBody = z.infer<typeof updateConditionReportBody
 
 export const versionBody = z.object({ version: z.number().int().min(1) }).meta({ id: 'VersionBody' });
 export const reportFindingParams = z.object({ id: z.coerce.number().int().positive(), findingId: z.coerce.number().int().positive() });
+
+export const historyQuery = z.object({
+  subjectType: z.enum(REPORT_SUBJECTS, { error: 'Say whose history: artifact or compartment.' }),
+  subjectId: z.coerce.number().int().positive(),
+});
+
+/** A subject's condition over time: its reports and incidents, newest first, and its photos by date. */
+export const conditionHistory = z
+  .object({
+    subjectLabel: z.string(),
+    entries: z.array(
+      z.discriminatedUnion('kind', [
+        z.object({ kind: z.literal('report'), id: z.number().int(), date: z.string(), grade: z.enum(GRADES), status: z.enum(REPORT_STATUSES), revision: z.number().int(), supersededById: z.number().int().nullable(), summary: z.string(), findingCount: z.number().int() }),
+        z.object({ kind: z.literal('incident'), id: z.number().int(), date: z.string(), title: z.string(), incidentKind: z.string() }),
+      ]),
+    ),
+    photos: z.array(
+      z.object({
+        mediaId: z.number().int(),
+        /** The day it shows: taken on (EXIF), else the report's inspection date, else the upload date. */
+        date: z.string(),
+        thumbUrl: z.string(),
+        displayUrl: z.string(),
+        caption: z.string(),
+        altText: z.string(),
+        reportId: z.number().int().nullable(),
+      }),
+    ),
+  })
+  .meta({ id: 'ConditionHistory' });
+export type ConditionHistory = z.infer<typeof conditionHistory>;

@@ -2,7 +2,7 @@ import type { CreateIncidentBody, Incident, IncidentsQuery, UpdateIncidentBody }
 import type { CreateRiskBody, DeckConditionOverlay, Risk, RisksQuery, UpdateRiskBody } from '@shared/schemas/risks';
 import type { ConditionReport, ConditionReportsQuery, CreateConditionReportBody, CreateFindingBody, UpdateConditionReportBody, UpdateFindingBody } from '@shared/schemas/condition';
 import type { Page } from '@shared/schemas/common';
-import type { ConditionReportSummary } from '@shared/schemas/condition';
+import type { ConditionHistory, ConditionReportSummary } from '@shared/schemas/condition';
 import { api, apiUrl } from './client';
 
 export const listReports = (params: Partial<ConditionReportsQuery>) => api.get<Page<ConditionReportSummary>>('/condition-reports', params);
@@ -29,3 +29,4 @@ export const createRisk = (body: CreateRiskBody) => api.post<Risk>('/risks', bod
 export const updateRisk = (id: number, body: UpdateRiskBody) => api.patch<Risk>(`/risks/${id}`, body);
 export const deleteRisk = (id: number) => api.delete<void>(`/risks/${id}`);
 export const getDeckCondition = (deckId: number) => api.get<DeckConditionOverlay>(`/decks/${deckId}/condition`);
+export const getConditionHistory = (subjectType: 'artifact' | 'compartment', subjectId: number) => api.get<ConditionHistory>('/condition-history', { subjectType, subjectId });

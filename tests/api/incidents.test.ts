@@ -101,3 +101,24 @@ describe('critical findings', () => {
     expect(mail.text).toContain('Loose or detached (physical forces) on 2019.4.12 Steam gauge: Take it down before it falls.');
   });
 });
+
+describe('condition history', () => {
+  it('lists a subject’s reports and incidents newest first, and its photos by the day they show', async () => {
+    const { cameraJpeg } = await import('../support/images.js');
+    const old = (await conservator.post('/api/v1/condition-reports', { subjectType: 'artifact', subjectId: gaugeId, inspectedOn: '2024-03-01' })).body;
+    await conservator.post(`/api/v1/condition-reports/${old.id}/submit`, { version: old.version });
+    const photo = await conservator.agent.post(`/api/v1/media?ownerType=condition-report&ownerId=${(await conservator.post('/api/v1/condition-reports', { subjectType: 'artifact', subjectId: gaugeId, inspectedOn: '2026-10-01' })).body.id}`).set('x-csrf-token', conservator.csrf).attach('file', await cameraJpeg(), 'now.jpg');
+    expect(photo.status).toBe(201);
+    await curator.agent.post(`/api/v1/media?ownerType=artifact&ownerId=${gaugeId}`).set('x-csrf-token', curator.csrf).attach('file', await cameraJpeg(), 'record.jpg');
+    await conservator.post('/api/v1/incidents', { vesselId, kind: 'theft', title: 'Bezel screws taken', foundOn: '2025-08-15', artifactIds: [gaugeId] });
+    const history = (await curator.get(`/api/v1/condition-history?subjectType=artifact&subjectId=${gaugeId}`)).body;
+    expect(history.subjectLabel).toBe('2019.4.12 Steam gauge');
+    expect(history.entries.map((e: { kind: string; date: string }) => `${e.kind} ${e.date}`)).toEqual(['report 2026-10-01', 'report 2025-08-15', 'incident 2025-08-15', 'report 2024-03-01']);
+    expect(history.entries[3]).toMatchObject({ grade: 'good', status: 'submitted' });
+    // Both photos carry the camera's date (2024-05-17); the one of the report says which report.
+    expect(history.photos).toHaveLength(2);
+    expect(history.photos.map((p: { reportId: number | null }) => p.reportId === null).sort()).toEqual([false, true]);
+    expect(history.photos[0].date).toBe('2024-05-17');
+    expect((await curator.get('/api/v1/condition-history?subjectType=artifact&subjectId=99999')).status).toBe(404);
+  });
+});

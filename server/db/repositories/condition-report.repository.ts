@@ -20,6 +20,11 @@ export class ConditionReportRepository {
     return this.repo.findOne({ where: { id }, relations: { surveyor: true } });
   }
 
+  /** Every report on a subject, newest inspection first. */
+  forSubject(subjectType: 'artifact' | 'compartment', subjectId: number) {
+    return this.repo.find({ where: { subjectType, subjectId }, order: { inspectedOn: 'DESC', id: 'DESC' } });
+  }
+
   /** The draft that amends a report, if one is open. */
   amendmentOf(id: number) {
     return this.repo.findOneBy({ supersedesId: id });

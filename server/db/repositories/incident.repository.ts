@@ -29,6 +29,15 @@ export class IncidentRepository {
     return pageOf(qb, query);
   }
 
+  /** Incidents that affected a subject, newest first. */
+  forSubject(subjectType: 'artifact' | 'compartment', subjectId: number) {
+    return this.repo
+      .createQueryBuilder('incident')
+      .where('incident.id IN (SELECT s.incidentId FROM incident_subjects s WHERE s.subjectType = :subjectType AND s.subjectId = :subjectId)', { subjectType, subjectId })
+      .orderBy('incident.foundOn', 'DESC')
+      .getMany();
+  }
+
   subjectsOf(incidentIds: number[]) {
     return incidentIds.length ? this.subjects.find({ where: { incidentId: In(incidentIds) } }) : Promise.resolve([]);
   }
