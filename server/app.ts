@@ -148,8 +148,9 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
   );
   app.use(express.json({ limit: '1mb' }));
   app.use('/api/v1', (req, _res, next) => {
-    // req.is() is null without a body and false for a body of another type
-    if (req.is('application/json') === false && !req.is('multipart/form-data')) {
+    // req.is() is null without a body and false for a body of another type; a proxy may send an empty one
+    const empty = req.headers['content-length'] === '0' && !req.headers['transfer-encoding'];
+    if (!empty && req.is('application/json') === false && !req.is('multipart/form-data')) {
       return next(new ApiError(415, 'unsupported_media_type', 'Send the request body as JSON (Content-Type: application/json).'));
     }
     next();

@@ -26,7 +26,7 @@ export function presentFinding(finding: ConditionFindingEntity): Finding {
   };
 }
 
-export function presentReportSummary(report: ConditionReportEntity, subjectLabel: string, supersededById: number | null): ConditionReportSummary {
+export function presentReportSummary(report: ConditionReportEntity, subjectLabel: string, supersededById: number | null, amendmentId: number | null = supersededById): ConditionReportSummary {
   return {
     id: report.id,
     vesselId: report.vesselId,
@@ -36,6 +36,7 @@ export function presentReportSummary(report: ConditionReportEntity, subjectLabel
     revision: report.revision,
     supersedesId: report.supersedesId,
     supersededById,
+    amendmentId,
     status: report.status,
     inspectedOn: report.inspectedOn,
     surveyor: report.surveyor ? { id: report.surveyor.id, name: report.surveyor.name } : null,
@@ -49,11 +50,11 @@ export function presentReportSummary(report: ConditionReportEntity, subjectLabel
   };
 }
 
-export function presentReport(report: ConditionReportEntity, subjectLabel: string, supersededById: number | null, findings: ConditionFindingEntity[], hasAmendment: boolean, viewer: Express.User): ConditionReport {
+export function presentReport(report: ConditionReportEntity, subjectLabel: string, supersededById: number | null, findings: ConditionFindingEntity[], amendmentId: number | null, viewer: Express.User): ConditionReport {
   const draft = report.status === 'draft';
   const readFindings = can(viewer.role, 'conditionReport', 'readFindings');
   return {
-    ...presentReportSummary(report, subjectLabel, supersededById),
+    ...presentReportSummary(report, subjectLabel, supersededById, amendmentId),
     temperatureC: report.temperatureC,
     relativeHumidity: report.relativeHumidity,
     computedGrade: report.computedGrade,
@@ -65,7 +66,7 @@ export function presentReport(report: ConditionReportEntity, subjectLabel: strin
     abilities: {
       update: draft && can(viewer.role, 'conditionReport', 'update'),
       submit: draft && can(viewer.role, 'conditionReport', 'submit'),
-      amend: !draft && supersededById === null && !hasAmendment && can(viewer.role, 'conditionReport', 'amend'),
+      amend: !draft && supersededById === null && amendmentId === null && can(viewer.role, 'conditionReport', 'amend'),
       delete: draft && can(viewer.role, 'conditionReport', 'delete'),
       readFindings,
     },

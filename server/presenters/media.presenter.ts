@@ -13,7 +13,8 @@ export function canChangeMediaOf(role: Express.User['role'], ownerType: MediaOwn
   return can(role, 'media', action) && can(role, OWNER_RESOURCE[ownerType], 'update');
 }
 
-export function presentMedia(media: MediaEntity, viewer: Express.User): Media {
+/** `locked`: the record no longer changes (a submitted report), so neither do its files. */
+export function presentMedia(media: MediaEntity, viewer: Express.User, locked = false): Media {
   const photo = media.kind === 'photo';
   return {
     id: media.id,
@@ -36,6 +37,6 @@ export function presentMedia(media: MediaEntity, viewer: Express.User): Media {
     uploadedBy: media.uploadedBy ? { id: media.uploadedBy.id, name: media.uploadedBy.name } : null,
     createdAt: media.createdAt.toISOString(),
     version: media.version,
-    abilities: { update: canChangeMediaOf(viewer.role, media.ownerType, 'update'), delete: canChangeMediaOf(viewer.role, media.ownerType, 'delete') },
+    abilities: { update: !locked && canChangeMediaOf(viewer.role, media.ownerType, 'update'), delete: !locked && canChangeMediaOf(viewer.role, media.ownerType, 'delete') },
   };
 }

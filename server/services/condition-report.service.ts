@@ -56,7 +56,7 @@ export class ConditionReportService {
     const report = await repos.conditionReports.findById(id);
     if (!report) throw new NotFoundError('The condition report');
     const [subject, findings, amendment] = [await this.subjectOf(repos, report.subjectType, report.subjectId), await repos.conditionReports.findings(id), await repos.conditionReports.amendmentOf(id)];
-    return presentReport(report, subject.label, amendment?.status === 'submitted' ? amendment.id : null, findings, amendment !== null, viewer);
+    return presentReport(report, subject.label, amendment?.status === 'submitted' ? amendment.id : null, findings, amendment?.id ?? null, viewer);
   }
 
   private searchDocument(report: ConditionReportEntity, subject: Subject, findings: ConditionFindingEntity[]): SearchDocument {
@@ -154,7 +154,10 @@ export class ConditionReportService {
     const repos = this.store.repos;
     const page = await repos.conditionReports.page(query);
     const items = [];
-    for (const report of page.items) items.push(presentReportSummary(report, (await this.subjectOf(repos, report.subjectType, report.subjectId)).label, await this.supersededBy(repos, report.id)));
+    for (const report of page.items) {
+      const amendment = await repos.conditionReports.amendmentOf(report.id);
+      items.push(presentReportSummary(report, (await this.subjectOf(repos, report.subjectType, report.subjectId)).label, amendment?.status === 'submitted' ? amendment.id : null, amendment?.id ?? null));
+    }
     return { ...page, items };
   }
 
@@ -192,12 +195,17 @@ export class ConditionReportService {
   }
 
   async remove(id: number, actor: Actor) {
-    await this.store.transaction(async (repos) => {
+    const keys = await this.store.transaction(async (repos) => {
       const report = await this.draftForChange(repos, id, null);
+      const photos = await repos.media.forOwner('condition-report', id);
+      for (const photo of photos) await repos.media.remove(photo.id);
       await repos.search.remove('condition-report', id);
       await repos.conditionReports.remove(id);
-      await recordAudit(repos, actor, { action: 'delete', entityType: 'condition-report', entityId: id, vesselId: report.vesselId, summary: `Draft condition report ${id} deleted` });
+      await recordAudit(repos, actor, { action: 'delete', entityType: 'condition-report', entityId: id, vesselId: report.vesselId, summary: `Draft condition report ${id} deleted${photos.length ? ` with its ${photos.length} photo${photos.length > 1 ? 's' : ''}` : ''}` });
+      return photos.map((p) => p.storageKey);
     });
+    // The files go once the rows are gone for good.
+    for (const key of keys) await this.files.remove(key);
   }
 
   async submit(id: number, version: number, viewer: Express.User, actor: Actor) {

@@ -59,14 +59,14 @@ export class MediaService {
   }
 
   async list(query: MediaOwnerQuery, viewer: Express.User) {
-    await this.ownerOf(this.store.repos, query.ownerType, query.ownerId);
-    return (await this.store.repos.media.forOwner(query.ownerType, query.ownerId)).map((m) => presentMedia(m, viewer));
+    const owner = await this.ownerOf(this.store.repos, query.ownerType, query.ownerId);
+    return (await this.store.repos.media.forOwner(query.ownerType, query.ownerId)).map((m) => presentMedia(m, viewer, owner.locked));
   }
 
   async get(id: number, viewer: Express.User) {
     const media = await this.store.repos.media.findById(id);
     if (!media) throw new NotFoundError('The file');
-    return presentMedia(media, viewer);
+    return presentMedia(media, viewer, (await this.ownerOf(this.store.repos, media.ownerType, media.ownerId)).locked);
   }
 
   /** The file to send for a variant, with its type and a download name. */

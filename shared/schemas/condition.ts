@@ -160,6 +160,8 @@ export const conditionReportSummary = z
     revision: z.number().int(),
     supersedesId: z.number().int().nullable(),
     supersededById: z.number().int().nullable(),
+    /** The revision that amends this one, draft or submitted. */
+    amendmentId: z.number().int().nullable(),
     status: z.enum(REPORT_STATUSES),
     inspectedOn: z.string(),
     surveyor: person,

@@ -99,6 +99,7 @@ describe('condition reports', () => {
     const amendment = await conservator.post(`/api/v1/condition-reports/${report.id}/amend`);
     expect(amendment.status).toBe(201);
     expect(amendment.body).toMatchObject({ status: 'draft', revision: 2, supersedesId: report.id, findingCount: 1, grade: 'fair' });
+    expect((await conservator.get(`/api/v1/condition-reports/${report.id}`)).body).toMatchObject({ amendmentId: amendment.body.id, supersededById: null });
     expect(amendment.body.findings[0]).toMatchObject({ rustGrade: '5-G', damageType: 'coating-failure' });
     expect((await conservator.post(`/api/v1/condition-reports/${report.id}/amend`)).status).toBe(409);
     // The original is unchanged and not yet superseded while the amendment is a draft.
@@ -163,6 +164,8 @@ describe('photos of a report', () => {
     const late = await conservator.agent.post(`/api/v1/media?ownerType=condition-report&ownerId=${report.id}`).set('x-csrf-token', conservator.csrf).attach('file', await cameraJpeg(), 'late.jpg');
     expect(late.status).toBe(409);
     expect((await conservator.send('delete', `/api/v1/media/${photo.body.id}`)).status).toBe(409);
+    const listed = (await conservator.get(`/api/v1/media?ownerType=condition-report&ownerId=${report.id}`)).body;
+    expect(listed[0].abilities).toEqual({ update: false, delete: false });
     // The amendment keeps pointing at the original's photo.
     const amendment = (await conservator.post(`/api/v1/condition-reports/${report.id}/amend`)).body;
     const moved = await conservator.patch(`/api/v1/condition-reports/${amendment.id}/findings/${amendment.findings[0].id}`, { location: { on: 'photo', mediaId: photo.body.id, area: [0.5, 0.5, 0.1, 0.1] }, version: amendment.findings[0].version });
@@ -205,5 +208,21 @@ describe('the report as a PDF', () => {
 
     const docent = (await signedInAs(ctx.app, ctx.store, 'docent')).client;
     expect((await docent.get(`/api/v1/condition-reports/${report.id}/pdf`)).status).toBe(403);
+  });
+});
+
+describe('deleting a draft', () => {
+  it('takes its photos and their files with it', async () => {
+    const { cameraJpeg } = await import('../support/images.js');
+    const { readdirSync } = await import('node:fs');
+    const report = await draft();
+    await conservator.agent.post(`/api/v1/media?ownerType=condition-report&ownerId=${report.id}`).set('x-csrf-token', conservator.csrf).attach('file', await cameraJpeg(), 'a.jpg');
+    const files = () => readdirSync(ctx.config.uploadsDir, { recursive: true, withFileTypes: true }).filter((e) => e.isFile()).length;
+    expect(files()).toBe(3);
+    // An empty body (as a proxy may send with DELETE) is no body.
+    const res = await conservator.agent.delete(`/api/v1/condition-reports/${report.id}`).set('x-csrf-token', conservator.csrf).set('content-length', '0');
+    expect(res.status).toBe(204);
+    expect(files()).toBe(0);
+    expect(await ctx.store.repos.media.countForOwner('condition-report', report.id)).toBe(0);
   });
 });
