@@ -6,7 +6,7 @@ export function mediaUrl(id: number, variant: 'thumb' | 'display' | 'original'):
   return `/api/v1/media/${id}/${variant}`;
 }
 
-const OWNER_RESOURCE: Record<MediaOwnerType, 'artifact' | 'compartment' | 'conditionReport'> = { artifact: 'artifact', compartment: 'compartment', 'condition-report': 'conditionReport' };
+const OWNER_RESOURCE: Record<MediaOwnerType, 'artifact' | 'compartment' | 'conditionReport' | 'incident'> = { artifact: 'artifact', compartment: 'compartment', 'condition-report': 'conditionReport', incident: 'incident' };
 
 /** Whether a role may add, change or delete files on this kind of record. */
 export function canChangeMediaOf(role: Express.User['role'], ownerType: MediaOwnerType, action: 'create' | 'update' | 'delete'): boolean {

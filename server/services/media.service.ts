@@ -15,7 +15,7 @@ import { derivativeFile, makeDerivatives, type PhotoFacts } from './media-deriva
 import type { UploadedFile } from './plan.service.js';
 
 const EXTENSIONS: Record<string, string> = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp', 'application/pdf': 'pdf' };
-const OWNER_LABELS: Record<MediaOwnerType, string> = { artifact: 'an artifact', compartment: 'a compartment', 'condition-report': 'a condition report' };
+const OWNER_LABELS: Record<MediaOwnerType, string> = { artifact: 'an artifact', compartment: 'a compartment', 'condition-report': 'a condition report', incident: 'an incident' };
 
 interface Owner {
   vesselId: number;
@@ -41,6 +41,11 @@ export class MediaService {
       const artifact = await repos.artifacts.findById(ownerId);
       if (!artifact) throw new NotFoundError('The artifact');
       return { vesselId: artifact.vesselId, label: `artifact ${artifact.objectNumber}` };
+    }
+    if (ownerType === 'incident') {
+      const incident = await repos.incidents.findById(ownerId);
+      if (!incident) throw new NotFoundError('The incident');
+      return { vesselId: incident.vesselId, label: `incident ${incident.id}` };
     }
     if (ownerType === 'condition-report') {
       const report = await repos.conditionReports.findById(ownerId);

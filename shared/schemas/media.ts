@@ -1,6 +1,6 @@
 import { z } from 'zod';
 
-export const MEDIA_OWNER_TYPES = ['artifact', 'compartment', 'condition-report'] as const;
+export const MEDIA_OWNER_TYPES = ['artifact', 'compartment', 'condition-report', 'incident'] as const;
 export type MediaOwnerType = (typeof MEDIA_OWNER_TYPES)[number];
 
 export const MEDIA_KINDS = ['photo', 'document'] as const;
@@ -47,7 +47,7 @@ export type Media = z.infer<typeof media>;
 export const mediaList = z.array(media);
 
 export const mediaOwnerQuery = z.object({
-  ownerType: z.enum(MEDIA_OWNER_TYPES, { error: 'Say what the file belongs to: artifact, compartment or condition-report.' }),
+  ownerType: z.enum(MEDIA_OWNER_TYPES, { error: 'Say what the file belongs to: artifact, compartment, condition-report or incident.' }),
   ownerId: z.coerce.number({ error: 'Give the id of the record the file belongs to.' }).int().positive(),
 });
 export type MediaOwnerQuery = z.infer<typeof mediaOwnerQuery>;

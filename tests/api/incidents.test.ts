@@ -122,3 +122,15 @@ describe('condition history', () => {
     expect((await curator.get('/api/v1/condition-history?subjectType=artifact&subjectId=99999')).status).toBe(404);
   });
 });
+
+describe('photos of an incident', () => {
+  it('are taken by those who log incidents', async () => {
+    const { cameraJpeg } = await import('../support/images.js');
+    const incident = (await curator.post('/api/v1/incidents', { vesselId, kind: 'vandalism', title: 'Paint thrown', foundOn: '2026-11-29' })).body;
+    const res = await conservator.agent.post(`/api/v1/media?ownerType=incident&ownerId=${incident.id}`).set('x-csrf-token', conservator.csrf).attach('file', await cameraJpeg(), 'scene.jpg');
+    expect(res.status).toBe(201);
+    const docent = (await signedInAs(ctx.app, ctx.store, 'docent')).client;
+    expect((await docent.agent.post(`/api/v1/media?ownerType=incident&ownerId=${incident.id}`).set('x-csrf-token', docent.csrf).attach('file', await cameraJpeg(), 'x.jpg')).status).toBe(403);
+    expect((await docent.get(`/api/v1/media?ownerType=incident&ownerId=${incident.id}`)).body).toHaveLength(1);
+  });
+});
