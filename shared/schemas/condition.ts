@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { GRADES, SEVERITIES } from '../calc/condition-grade.js';
 import { RUST_DISTRIBUTIONS } from '../calc/rust-grade.js';
 import { listQuery, pageOf } from './common.js';
+import { INCIDENT_KINDS } from './incidents.js';
 
 /** The Canadian Conservation Institute's ten agents of deterioration. */
 export const AGENTS = [
@@ -245,7 +246,7 @@ export const conditionHistory = z
     entries: z.array(
       z.discriminatedUnion('kind', [
         z.object({ kind: z.literal('report'), id: z.number().int(), date: z.string(), grade: z.enum(GRADES), status: z.enum(REPORT_STATUSES), revision: z.number().int(), supersededById: z.number().int().nullable(), summary: z.string(), findingCount: z.number().int() }),
-        z.object({ kind: z.literal('incident'), id: z.number().int(), date: z.string(), title: z.string(), incidentKind: z.string() }),
+        z.object({ kind: z.literal('incident'), id: z.number().int(), date: z.string(), title: z.string(), incidentKind: z.enum(INCIDENT_KINDS) }),
       ]),
     ),
     photos: z.array(
