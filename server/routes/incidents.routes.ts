@@ -16,7 +16,7 @@ export function incidentRoutes(api: ApiRouter, incidents: IncidentService) {
     access: allowed('incident', 'read'),
     query: incidentsQuery,
     response: incidentPage,
-    handler: ({ query }) => incidents.list(query),
+    handler: ({ req, query }) => incidents.list(query, req.user!),
   });
 
   api.route({
@@ -41,7 +41,7 @@ export function incidentRoutes(api: ApiRouter, incidents: IncidentService) {
     params: idParam,
     response: incident,
     errors: [404],
-    handler: ({ params }) => incidents.get(params.id),
+    handler: ({ req, params }) => incidents.get(params.id, req.user!),
   });
 
   api.route({
@@ -53,7 +53,7 @@ export function incidentRoutes(api: ApiRouter, incidents: IncidentService) {
     params: idParam,
     body: updateIncidentBody,
     response: incident,
-    errors: [404, 409],
-    handler: ({ req, params, body }) => incidents.update(params.id, body, actorOf(req)),
+    errors: [404, 409, 422],
+    handler: ({ req, params, body }) => incidents.update(params.id, body, req.user!, actorOf(req)),
   });
 }

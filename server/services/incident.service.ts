@@ -5,6 +5,7 @@ import type { z } from 'zod';
 import type { IncidentSubjectEntity } from '../db/entities/incident-subject.entity.js';
 import type { IncidentEntity } from '../db/entities/incident.entity.js';
 import type { Repositories, Store } from '../db/store.js';
+import { can } from '../../shared/permissions.js';
 import { NotFoundError, UnprocessableError } from '../http/errors.js';
 import { changesBetween, recordAudit, type Actor } from './audit.service.js';
 import type { ConditionAlerts } from './condition-alerts.js';
@@ -21,6 +22,12 @@ const FINDING_OF: Record<IncidentKind, { agent: Agent; damageType: DamageType }>
   other: { agent: 'physical-forces', damageType: 'other' },
 };
 
+/** Found on: not after tomorrow (UTC, whatever the time zone); it happened on or before it was found. */
+function checkDates(foundOn: string, occurredOn: string | null) {
+  if (foundOn > new Date(Date.now() + 86_400_000).toISOString().slice(0, 10)) throw new UnprocessableError('An incident cannot be found in the future.', { foundOn: 'This date is in the future.' });
+  if (occurredOn && occurredOn > foundOn) throw new UnprocessableError('It cannot have happened after it was found.', { occurredOn: 'After the day it was found.' });
+}
+
 /**
  * Incidents: what happened, what it affected and what was done. Logging one can close affected
  * compartments to visitors, opens a draft condition report with a finding on every affected item,
@@ -29,7 +36,7 @@ const FINDING_OF: Record<IncidentKind, { agent: Agent; damageType: DamageType }>
 export class IncidentService {
   constructor(private readonly store: Store, private readonly reports: ConditionReportService, private readonly alerts: ConditionAlerts) {}
 
-  private async present(incident: IncidentEntity, subjects: IncidentSubjectEntity[]): Promise<Incident> {
+  private async present(incident: IncidentEntity, subjects: IncidentSubjectEntity[], viewer: Express.User): Promise<Incident> {
     const repos = this.store.repos;
     const mine = subjects.filter((x) => x.incidentId === incident.id);
     const artifactLabels = await repos.artifacts.labels(mine.filter((s) => s.subjectType === 'artifact').map((s) => s.subjectId));
@@ -54,21 +61,22 @@ export class IncidentService {
       loggedBy: incident.loggedBy ? { id: incident.loggedBy.id, name: incident.loggedBy.name } : null,
       createdAt: incident.createdAt.toISOString(),
       version: incident.version,
+      abilities: { update: can(viewer.role, 'incident', 'update') },
     };
   }
 
-  async list(query: IncidentsQuery) {
+  async list(query: IncidentsQuery, viewer: Express.User) {
     const page = await this.store.repos.incidents.page(query);
     const subjects = await this.store.repos.incidents.subjectsOf(page.items.map((i) => i.id));
     const items = [];
-    for (const incident of page.items) items.push(await this.present(incident, subjects));
+    for (const incident of page.items) items.push(await this.present(incident, subjects, viewer));
     return { ...page, items };
   }
 
-  async get(id: number) {
+  async get(id: number, viewer: Express.User) {
     const incident = await this.store.repos.incidents.findById(id);
     if (!incident) throw new NotFoundError('The incident');
-    return this.present(incident, await this.store.repos.incidents.subjectsOf([id]));
+    return this.present(incident, await this.store.repos.incidents.subjectsOf([id]), viewer);
   }
 
   private async checkSubjects(repos: Repositories, vesselId: number, artifactIds: number[], compartmentIds: number[]) {
@@ -86,6 +94,7 @@ export class IncidentService {
     const artifactIds = [...new Set(body.artifactIds)];
     const compartmentIds = [...new Set(body.compartmentIds)];
     const closing = [...new Set(body.closeCompartmentIds)];
+    checkDates(body.foundOn, body.occurredOn);
     const stray = closing.filter((id) => !compartmentIds.includes(id));
     if (stray.length) throw new UnprocessableError('Only an affected compartment can be closed: add it to the affected compartments first.', { closeCompartmentIds: 'Not among the affected compartments.' });
     const saved = await this.store.transaction(async (repos) => {
@@ -130,7 +139,7 @@ export class IncidentService {
       });
       return result;
     });
-    const presented = await this.get(saved.id);
+    const presented = await this.get(saved.id, viewer);
     const affected = [...presented.artifacts, ...presented.compartments].map((s) => s.label);
     await this.alerts.tellCurators(
       `${INCIDENT_KIND_LABELS[presented.kind]}: ${presented.title}`,
@@ -146,18 +155,19 @@ export class IncidentService {
     return presented;
   }
 
-  async update(id: number, body: UpdateIncidentBody, actor: Actor) {
+  async update(id: number, body: UpdateIncidentBody, viewer: Express.User, actor: Actor) {
     await this.store.transaction(async (repos) => {
       const incident = await repos.incidents.findById(id);
       if (!incident) throw new NotFoundError('The incident');
       if (incident.version !== body.version) throw await staleEditError(repos, 'incident', id, 'this incident', incident.version, body.version);
       const { version: _v, ...fields } = body;
+      if (fields.occurredOn !== undefined) checkDates(incident.foundOn, fields.occurredOn);
       const changes = changesBetween(incident, fields, ['title', 'occurredOn', 'description', 'reportedTo', 'policeReference', 'actionsTaken']);
       if (!changes) return;
       Object.assign(incident, fields);
       await repos.incidents.save(incident);
       await recordAudit(repos, actor, { action: 'update', entityType: 'incident', entityId: id, vesselId: incident.vesselId, summary: `Incident ${id} changed (${Object.keys(changes).join(', ')})`, changes });
     });
-    return this.get(id);
+    return this.get(id, viewer);
   }
 }

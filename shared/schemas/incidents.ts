@@ -36,6 +36,7 @@ export const incident = z
     loggedBy: z.object({ id: z.number().int(), name: z.string() }).nullable(),
     createdAt: z.string(),
     version: z.number().int(),
+    abilities: z.object({ update: z.boolean() }),
   })
   .meta({ id: 'Incident' });
 export type Incident = z.infer<typeof incident>;

@@ -4,6 +4,7 @@ import { listQuery, pageOf, text } from './common.js';
 import { AGENTS } from './condition.js';
 
 export const RISK_STATUSES = ['open', 'treated'] as const;
+export const RISK_STATUS_LABELS: Record<(typeof RISK_STATUSES)[number], string> = { open: 'Open', treated: 'Treated' };
 
 export const risk = z
   .object({

@@ -134,3 +134,18 @@ describe('photos of an incident', () => {
     expect((await docent.get(`/api/v1/media?ownerType=incident&ownerId=${incident.id}`)).body).toHaveLength(1);
   });
 });
+
+describe('incident dates', () => {
+  it('refuses one found in the future, or that happened after it was found', async () => {
+    const future = await conservator.post('/api/v1/incidents', { vesselId, kind: 'other', title: 'x', foundOn: '2999-01-01' });
+    expect(future.status).toBe(422);
+    expect(future.body.error.fields.foundOn).toBe('This date is in the future.');
+    const backwards = await conservator.post('/api/v1/incidents', { vesselId, kind: 'other', title: 'x', foundOn: '2026-11-01', occurredOn: '2026-11-05' });
+    expect(backwards.body.error.fields.occurredOn).toBe('After the day it was found.');
+    const ok = (await conservator.post('/api/v1/incidents', { vesselId, kind: 'other', title: 'x', foundOn: '2026-11-01' })).body;
+    expect(ok.abilities).toEqual({ update: true });
+    expect((await conservator.patch(`/api/v1/incidents/${ok.id}`, { occurredOn: '2026-11-02', version: ok.version })).status).toBe(422);
+    const docent = (await signedInAs(ctx.app, ctx.store, 'docent')).client;
+    expect((await docent.get(`/api/v1/incidents/${ok.id}`)).body.abilities).toEqual({ update: false });
+  });
+});
