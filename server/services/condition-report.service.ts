@@ -1,6 +1,6 @@
 import { gradeFromFindings } from '../../shared/calc/condition-grade.js';
 import { rustGrade } from '../../shared/calc/rust-grade.js';
-import { AGENT_LABELS, DAMAGE_TYPES, RUST_DAMAGE_TYPES, type ConditionReportsQuery, type UpdateConditionReportBody, type UpdateFindingBody, type createConditionReportBody, type createFindingBody } from '../../shared/schemas/condition.js';
+import { AGENT_LABELS, DAMAGE_TYPES, PERCENT_FIELDS, RUST_DAMAGE_TYPES, type ConditionReportsQuery, type UpdateConditionReportBody, type UpdateFindingBody, type createConditionReportBody, type createFindingBody } from '../../shared/schemas/condition.js';
 import type { z } from 'zod';
 import type { ConditionFindingEntity } from '../db/entities/condition-finding.entity.js';
 import type { ConditionReportEntity } from '../db/entities/condition-report.entity.js';
@@ -22,6 +22,16 @@ const FINDING_FIELDS: (keyof ConditionFindingEntity)[] = ['artifactId', 'agent',
 interface Subject {
   vesselId: number;
   label: string;
+}
+
+/** 422 for a percentage outside 0–100 (the schema only checks that it is a number). */
+function checkPercents(values: Partial<Record<keyof typeof PERCENT_FIELDS, number | null>>) {
+  for (const [field, label] of Object.entries(PERCENT_FIELDS) as [keyof typeof PERCENT_FIELDS, string][]) {
+    const value = values[field];
+    if (value !== undefined && value !== null && (value < 0 || value > 100)) {
+      throw new UnprocessableError(`${label} must be between 0 and 100 %.`, { [field]: `${label} must be between 0 and 100.` });
+    }
+  }
 }
 
 const SUBMITTED = 'This report is submitted and signed, so it no longer changes. Amend it: that makes a new revision which links to this one.';
@@ -166,6 +176,7 @@ export class ConditionReportService {
   }
 
   async create(body: z.output<typeof createConditionReportBody>, viewer: Express.User, actor: Actor) {
+    checkPercents(body);
     const report = await this.store.transaction(async (repos) => {
       const subject = await this.subjectOf(repos, body.subjectType, body.subjectId);
       const created = await repos.conditionReports.create({ ...body, vesselId: subject.vesselId, surveyorId: viewer.id, status: 'draft', revision: 1 });
@@ -180,6 +191,7 @@ export class ConditionReportService {
     await this.store.transaction(async (repos) => {
       const report = await this.draftForChange(repos, id, body.version);
       const { version: _version, ...fields } = body;
+      checkPercents(fields);
       const next = { ...report, ...fields };
       if (next.gradeOverride && !next.overrideReason?.trim()) {
         throw new UnprocessableError('Say why the grade differs from the one the rule gives.', { overrideReason: 'A reason is needed to override the grade.' });
@@ -307,7 +319,8 @@ export class ConditionReportService {
   }
 
   /** Checks a finding against its report: scope, agent and damage type, rust inputs, location. */
-  private async checkFinding(repos: Repositories, report: ConditionReportEntity, f: Pick<ConditionFindingEntity, 'artifactId' | 'agent' | 'damageType' | 'percentRusted' | 'rustDistribution' | 'location'>) {
+  private async checkFinding(repos: Repositories, report: ConditionReportEntity, f: Pick<ConditionFindingEntity, 'artifactId' | 'agent' | 'damageType' | 'percentRusted' | 'rustDistribution' | 'location' | 'extentPercent'>) {
+    checkPercents(f);
     if (f.artifactId !== null) {
       const artifact = await repos.artifacts.findById(f.artifactId);
       const inScope = artifact && (report.subjectType === 'artifact' ? artifact.id === report.subjectId : artifact.compartmentId === report.subjectId);

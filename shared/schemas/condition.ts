@@ -87,11 +87,11 @@ export const findingLocation = z.discriminatedUnion('on', [
 ]);
 export type FindingLocation = z.infer<typeof findingLocation>;
 
-const percent = (label: string) =>
-  z
-    .number({ error: `${label} must be a number.` })
-    .min(0, `${label} must be between 0 and 100.`)
-    .max(100, `${label} must be between 0 and 100.`);
+/** A percentage; its range (0–100) is checked by the server, which answers 422 outside it. */
+const percent = (label: string) => z.number({ error: `${label} must be a number.` });
+
+/** The percentages of a report and of a finding, with how they are named in messages. */
+export const PERCENT_FIELDS = { extentPercent: 'Extent', percentRusted: 'Percent rusted', relativeHumidity: 'Relative humidity' } as const;
 
 export const finding = z
   .object({

@@ -64,9 +64,13 @@ describe('condition reports', () => {
     const rustOnGlass = await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { agent: 'physical-forces', damageType: 'broken-glass-or-dial', severity: 'slight', percentRusted: 3 });
     expect(rustOnGlass.status).toBe(422);
     const tooMuch = await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { ...coating, extentPercent: 140 });
-    expect(tooMuch.status).toBe(400);
+    expect(tooMuch.status).toBe(422);
     expect(tooMuch.body.error.fields.extentPercent).toBe('Extent must be between 0 and 100.');
+    const rusted = await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { ...coating, percentRusted: -1 });
+    expect(rusted.status).toBe(422);
+    expect(rusted.body.error.fields.percentRusted).toBe('Percent rusted must be between 0 and 100.');
     const humid = await conservator.patch(`/api/v1/condition-reports/${report.id}`, { relativeHumidity: -3, version: report.version });
+    expect(humid.status).toBe(422);
     expect(humid.body.error.fields.relativeHumidity).toBe('Relative humidity must be between 0 and 100.');
     // A finding on an artifact report concerns that artifact unless said otherwise.
     const own = await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { agent: 'water', damageType: 'water-staining', severity: 'slight' });
