@@ -16,7 +16,7 @@ export function conditionReportRoutes(api: ApiRouter, reports: ConditionReportSe
     access: allowed('conditionReport', 'read'),
     query: conditionReportsQuery,
     response: conditionReportPage,
-    handler: ({ query }) => reports.list(query),
+    handler: ({ req, query }) => reports.list(query, req.user!),
   });
 
   api.route({

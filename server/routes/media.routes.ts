@@ -65,11 +65,11 @@ export function mediaRoutes(api: ApiRouter, service: MediaService, options: { in
     method: 'delete',
     path: '/media/:id',
     tag,
-    summary: 'Delete a photo or document and its files',
+    summary: 'Delete a photo or document and its files (409 when a submitted report relies on it)',
     access: allowed('media', 'delete'),
     params: idParam,
     status: 204,
-    errors: [404],
+    errors: [404, 409],
     handler: ({ req, params }) => service.remove(params.id, req.user!, actorOf(req)),
   });
 

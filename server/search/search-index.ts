@@ -59,9 +59,11 @@ function scopeOf(kind: SearchKind, vesselId: number): string {
   return `${kind}${vesselId}`;
 }
 
-/** What a person typed (see matchExpression), limited to one kind of record on one vessel. */
-export function scopedMatch(kind: SearchKind, vesselId: number, words: string): string {
-  return `scope : "${scopeOf(kind, vesselId)}" AND {number title body extra} : (${words})`;
+export type SearchColumn = 'number' | 'title' | 'body' | 'extra';
+
+/** What a person typed (see matchExpression), limited to one kind of record on one vessel, and to some columns. */
+export function scopedMatch(kind: SearchKind, vesselId: number, words: string, columns: readonly SearchColumn[] = ['number', 'title', 'body', 'extra']): string {
+  return `scope : "${scopeOf(kind, vesselId)}" AND {${columns.join(' ')}} : (${words})`;
 }
 
 /**

@@ -6,6 +6,7 @@ import type { CompartmentEntity } from '../db/entities/compartment.entity.js';
 import type { Repositories, Store } from '../db/store.js';
 import { ConflictError, NotFoundError, UnprocessableError } from '../http/errors.js';
 import { compartmentLabel, presentArtifact, presentMarker, presentMove } from '../presenters/artifact.presenter.js';
+import { reindexReportsOf } from '../search/condition-report-document.js';
 import type { SearchDocument } from '../search/search-index.js';
 import { checkPlace } from './artifact-place.js';
 import { changesBetween, recordAudit, type Actor } from './audit.service.js';
@@ -182,6 +183,7 @@ export class ArtifactService {
       artifact.objectNumberSort = objectNumberSortKey(artifact.objectNumber);
       const saved = await repos.artifacts.save(artifact);
       await repos.search.put(searchDocumentOf(saved));
+      if ('name' in changes || 'objectNumber' in changes) await reindexReportsOf(repos, 'artifact', id, `${saved.objectNumber} ${saved.name}`);
       await recordAudit(repos, actor, {
         action: 'update',
         entityType: 'artifact',

@@ -9,6 +9,7 @@ import type { VesselEntity } from '../db/entities/vessel.entity.js';
 import type { Repositories, Store } from '../db/store.js';
 import { ConflictError, NotFoundError, StaleVersionError, UnprocessableError } from '../http/errors.js';
 import { presentCompartment } from '../presenters/compartment.presenter.js';
+import { reindexReportsOf } from '../search/condition-report-document.js';
 import { changesBetween, recordAudit, type Actor } from './audit.service.js';
 
 const EDITABLE: (keyof CompartmentEntity & keyof CreateCompartmentBody)[] = ['deckId', 'designation', 'name', 'description', 'accessStatus', 'virtualVisit', 'outline'];
@@ -109,6 +110,7 @@ export class CompartmentService {
       Object.assign(compartment, fields);
       compartment.designationKey = designationKey(compartment.designation);
       const result = await repos.compartments.save(compartment);
+      if ('designation' in changes || 'name' in changes) await reindexReportsOf(repos, 'compartment', id, `${result.designation} ${result.name}`);
       const what = Object.keys(changes).join(', ');
       await recordAudit(repos, actor, { action: 'update', entityType: 'compartment', entityId: id, vesselId: vessel.id, summary: `Compartment ${compartment.designation} changed (${what})`, changes });
       return result;
@@ -126,6 +128,14 @@ export class CompartmentService {
       }
       const files = await repos.media.countForOwner('compartment', id);
       if (files > 0) throw new ConflictError(`${compartment.designation} has ${files === 1 ? 'a photo or document' : `${files} photos or documents`}. Delete ${files === 1 ? 'it' : 'them'} first.`);
+      // Condition records are kept for good; a compartment they speak of stays too.
+      const reports = (await repos.conditionReports.forSubject('compartment', id)).length;
+      const incidents = (await repos.incidents.forSubject('compartment', id)).length;
+      const risks = await repos.risks.countLinkedTo('compartment', id);
+      if (reports + incidents + risks > 0) {
+        const what = [reports && `${reports} condition report${reports > 1 ? 's' : ''}`, incidents && `${incidents} incident${incidents > 1 ? 's' : ''}`, risks && `${risks} risk${risks > 1 ? 's' : ''}`].filter(Boolean).join(', ');
+        throw new ConflictError(`${compartment.designation} is named in ${what}. Condition records are kept, so the compartment stays; change its access status instead.`);
+      }
       await repos.compartments.remove(id);
       await recordAudit(repos, actor, {
         action: 'delete',

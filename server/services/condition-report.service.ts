@@ -1,4 +1,5 @@
 import { gradeFromFindings } from '../../shared/calc/condition-grade.js';
+import { can } from '../../shared/permissions.js';
 import { rustGrade } from '../../shared/calc/rust-grade.js';
 import { AGENT_LABELS, DAMAGE_TYPES, PERCENT_FIELDS, RUST_DAMAGE_TYPES, type ConditionReportsQuery, type UpdateConditionReportBody, type UpdateFindingBody, type createConditionReportBody, type createFindingBody } from '../../shared/schemas/condition.js';
 import type { z } from 'zod';
@@ -8,7 +9,7 @@ import type { Repositories, Store } from '../db/store.js';
 import { ConflictError, NotFoundError, UnprocessableError } from '../http/errors.js';
 import { presentReport, presentReportSummary } from '../presenters/condition-report.presenter.js';
 import { mediaUrl } from '../presenters/media.presenter.js';
-import type { SearchDocument } from '../search/search-index.js';
+import { conditionReportDocument } from '../search/condition-report-document.js';
 import { changesBetween, recordAudit, type Actor } from './audit.service.js';
 import type { FileStore } from '../storage/file-store.js';
 import type { ConditionAlerts } from './condition-alerts.js';
@@ -69,18 +70,6 @@ export class ConditionReportService {
     return presentReport(report, subject.label, amendment?.status === 'submitted' ? amendment.id : null, findings, amendment?.id ?? null, viewer);
   }
 
-  private searchDocument(report: ConditionReportEntity, subject: Subject, findings: ConditionFindingEntity[]): SearchDocument {
-    return {
-      kind: 'condition-report',
-      recordId: report.id,
-      vesselId: report.vesselId,
-      number: `CR-${report.id}`,
-      title: `${subject.label}, ${report.inspectedOn}`,
-      body: [report.summary, ...findings.flatMap((f) => [DAMAGE_TYPES[f.damageType].label, f.description, f.recommendedAction])].filter(Boolean).join('\n'),
-      extra: [...new Set(findings.map((f) => AGENT_LABELS[f.agent]))].join(' · '),
-    };
-  }
-
   /** Recomputes the grade and counts from the findings, saves the report and its search document. */
   private async refresh(repos: Repositories, report: ConditionReportEntity) {
     const findings = await repos.conditionReports.findings(report.id);
@@ -88,7 +77,7 @@ export class ConditionReportService {
     report.grade = report.gradeOverride ?? report.computedGrade;
     report.findingCount = findings.length;
     const saved = await repos.conditionReports.save(report);
-    await repos.search.put(this.searchDocument(saved, await this.subjectOf(repos, saved.subjectType, saved.subjectId), findings));
+    await repos.search.put(conditionReportDocument(saved, (await this.subjectOf(repos, saved.subjectType, saved.subjectId)).label, findings));
     return saved;
   }
 
@@ -160,9 +149,9 @@ export class ConditionReportService {
     return { subjectLabel: subject.label, entries, photos };
   }
 
-  async list(query: ConditionReportsQuery) {
+  async list(query: ConditionReportsQuery, viewer: Express.User) {
     const repos = this.store.repos;
-    const page = await repos.conditionReports.page(query);
+    const page = await repos.conditionReports.page(query, can(viewer.role, 'conditionReport', 'readFindings'));
     const items = [];
     for (const report of page.items) {
       const amendment = await repos.conditionReports.amendmentOf(report.id);

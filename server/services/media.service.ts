@@ -181,6 +181,9 @@ export class MediaService {
       if (!media) throw new NotFoundError('The file');
       this.mayChange(viewer, media.ownerType, 'delete');
       if ((await this.ownerOf(repos, media.ownerType, media.ownerId)).locked) throw new ConflictError('This report is submitted, so its photos no longer change.');
+      if ((await repos.conditionReports.submittedFindingsOnPhoto(id)) > 0) {
+        throw new ConflictError('A submitted condition report marks a finding on this photo, so the photo is kept with the record.');
+      }
       await repos.media.remove(id);
       await this.refreshCover(repos, media.ownerType, media.ownerId);
       await recordAudit(repos, actor, {

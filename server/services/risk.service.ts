@@ -140,12 +140,19 @@ export class RiskService {
           artifactIds ?? current.filter((s) => s.subjectType === 'artifact').map((s) => s.subjectId),
           compartmentIds ?? current.filter((s) => s.subjectType === 'compartment').map((s) => s.subjectId),
         );
-        await repos.risks.setSubjects(id, subjects);
-        changes = { ...(changes ?? {}), subjects: { from: current.map((s) => `${s.subjectType} ${s.subjectId}`), to: subjects.map((s) => `${s.subjectType} ${s.subjectId}`) } };
+        const from = current.map((s) => `${s.subjectType} ${s.subjectId}`).sort();
+        const to = subjects.map((s) => `${s.subjectType} ${s.subjectId}`).sort();
+        if (from.join() !== to.join()) {
+          await repos.risks.setSubjects(id, subjects);
+          changes = { ...(changes ?? {}), subjects: { from, to } };
+        }
       }
       if (!changes) return;
+      const before = risk.version;
       Object.assign(risk, next);
       await repos.risks.save(risk);
+      // A change of what the risk concerns lives in another table: the risk's own version must move too.
+      if ((await repos.risks.findById(id))!.version === before) await repos.risks.bumpVersion(id);
       await recordAudit(repos, actor, { action: 'update', entityType: 'risk', entityId: id, vesselId: risk.vesselId, summary: `Risk ${id} changed (${Object.keys(changes).join(', ')})`, changes });
     });
     return this.get(id, viewer);

@@ -230,3 +230,32 @@ describe('deleting a draft', () => {
     expect(await ctx.store.repos.media.countForOwner('condition-report', report.id)).toBe(0);
   });
 });
+
+describe('what a condition record keeps in place', () => {
+  it('keeps a compartment named by a report, and a photo a submitted finding is marked on', async () => {
+    const { cameraJpeg } = await import('../support/images.js');
+    const report = await draft('compartment', place.second);
+    const refused = await curator.send('delete', `/api/v1/compartments/${place.second}`);
+    expect(refused.status).toBe(409);
+    expect(refused.body.error.message).toMatch(/named in 1 condition report/);
+    const photo = (await curator.agent.post(`/api/v1/media?ownerType=compartment&ownerId=${place.second}`).set('x-csrf-token', curator.csrf).attach('file', await cameraJpeg(), 'room.jpg')).body;
+    const marked = (await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { ...coating, location: { on: 'photo', mediaId: photo.id, area: [0, 0, 0.5, 0.5] } })).body;
+    await conservator.post(`/api/v1/condition-reports/${report.id}/submit`, { version: marked.version });
+    const kept = await curator.send('delete', `/api/v1/media/${photo.id}`);
+    expect(kept.status).toBe(409);
+    expect(kept.body.error.message).toMatch(/submitted condition report marks a finding on this photo/);
+  });
+
+  it('follows a renamed subject in search, and searches only titles for roles that do not read findings', async () => {
+    const report = await draft('artifact', gaugeId);
+    await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { agent: 'water', damageType: 'water-staining', severity: 'slight', description: 'Tide marks on the dial' });
+    const gauge = (await curator.get(`/api/v1/artifacts/${gaugeId}`)).body;
+    await curator.patch(`/api/v1/artifacts/${gaugeId}`, { name: 'Boiler pressure gauge', version: gauge.version });
+    expect((await curator.get(`/api/v1/condition-reports?vesselId=${vesselId}&q=boiler`)).body.total).toBe(1);
+    expect((await curator.get(`/api/v1/condition-reports?vesselId=${vesselId}&q=steam`)).body.total).toBe(0);
+    const docent = (await signedInAs(ctx.app, ctx.store, 'docent')).client;
+    expect((await docent.get(`/api/v1/condition-reports?vesselId=${vesselId}&q=tide`)).body.total).toBe(0);
+    expect((await docent.get(`/api/v1/condition-reports?vesselId=${vesselId}&q=boiler`)).body.total).toBe(1);
+    expect((await curator.get(`/api/v1/condition-reports?vesselId=${vesselId}&q=tide`)).body.total).toBe(1);
+  });
+});

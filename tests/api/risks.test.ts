@@ -78,3 +78,16 @@ describe('the deck overlay', () => {
     ]);
   });
 });
+
+describe('what a risk concerns', () => {
+  it('moves the version when only its compartments change, so a stale edit of them answers 409', async () => {
+    const r = (await conservator.post('/api/v1/risks', { vesselId, statement: 'Leaks', agent: 'water', a: 3, b: 3, c: 3, compartmentIds: [place.first] })).body;
+    const first = await conservator.patch(`/api/v1/risks/${r.id}`, { compartmentIds: [place.second], version: r.version });
+    expect(first.body.version).toBe(r.version + 1);
+    const second = await conservator.patch(`/api/v1/risks/${r.id}`, { compartmentIds: [place.first, place.second], version: r.version });
+    expect(second.status).toBe(409);
+    expect(second.body.error.fields.subjects).toBeDefined();
+    const same = await conservator.patch(`/api/v1/risks/${r.id}`, { compartmentIds: [place.second], version: first.body.version });
+    expect(same.body.version).toBe(first.body.version);
+  });
+});

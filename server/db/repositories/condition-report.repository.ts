@@ -20,6 +20,15 @@ export class ConditionReportRepository {
     return this.repo.findOne({ where: { id }, relations: { surveyor: true } });
   }
 
+  /** Findings of submitted reports marked on a photo (which must then stay). SQLite's json_extract. */
+  async submittedFindingsOnPhoto(mediaId: number): Promise<number> {
+    const [row] = (await this.manager.query(
+      `SELECT COUNT(*) AS n FROM condition_findings f JOIN condition_reports r ON r.id = f.reportId WHERE r.status = 'submitted' AND json_extract(f.location, '$.mediaId') = ?`,
+      [mediaId],
+    )) as { n: number }[];
+    return Number(row?.n ?? 0);
+  }
+
   /** Every report on a subject, newest inspection first. */
   forSubject(subjectType: 'artifact' | 'compartment', subjectId: number) {
     return this.repo.find({ where: { subjectType, subjectId }, order: { inspectedOn: 'DESC', id: 'DESC' } });
@@ -44,7 +53,8 @@ export class ConditionReportRepository {
     return current;
   }
 
-  async page(query: ConditionReportsQuery) {
+  /** `findingsVisible`: whether the reader may see findings; if not, a search looks at numbers and titles only. */
+  async page(query: ConditionReportsQuery, findingsVisible = true) {
     const qb = this.repo.createQueryBuilder('report').leftJoinAndSelect('report.surveyor', 'surveyor');
     if (query.vesselId) qb.andWhere('report.vesselId = :vesselId', { vesselId: query.vesselId });
     if (query.subjectType) qb.andWhere('report.subjectType = :subjectType', { subjectType: query.subjectType });
@@ -55,7 +65,7 @@ export class ConditionReportRepository {
     if (query.q && !words) qb.andWhere('1 = 0');
     if (words) {
       if (!query.vesselId) qb.andWhere('1 = 0'); // searching is per vessel, as its index is
-      else qb.innerJoin(SEARCH_TABLE, SEARCH_TABLE, `${SEARCH_TABLE}.record_id = report.id AND ${SEARCH_TABLE}.kind = 'condition-report'`).andWhere(`${SEARCH_TABLE} MATCH :match`, { match: scopedMatch('condition-report', query.vesselId, words) });
+      else qb.innerJoin(SEARCH_TABLE, SEARCH_TABLE, `${SEARCH_TABLE}.record_id = report.id AND ${SEARCH_TABLE}.kind = 'condition-report'`).andWhere(`${SEARCH_TABLE} MATCH :match`, { match: scopedMatch('condition-report', query.vesselId, words, findingsVisible ? undefined : ['number', 'title']) });
     }
     // On the same date, the latest revision first.
     return pageOf(qb, query, 'id', 'DESC');

@@ -42,6 +42,14 @@ export class RiskRepository {
     return this.repo.save(risk);
   }
 
+  countLinkedTo(subjectType: 'artifact' | 'compartment', subjectId: number) {
+    return this.subjects.countBy({ subjectType, subjectId });
+  }
+
+  async bumpVersion(id: number) {
+    await this.repo.createQueryBuilder().update().set({ version: () => '"version" + 1' }).where('id = :id', { id }).execute();
+  }
+
   async setSubjects(riskId: number, subjects: Omit<RiskSubjectEntity, 'riskId' | 'risk'>[]) {
     await this.subjects.delete({ riskId });
     if (subjects.length) await this.subjects.save(subjects.map((s) => this.subjects.create({ ...s, riskId })));
