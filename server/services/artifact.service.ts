@@ -266,5 +266,6 @@ export class ArtifactService {
     Object.assign(artifact, next);
     artifact.compartment = compartment;
     await repos.artifacts.save(artifact);
+    await repos.risks.setDeckOf('artifact', artifact.id, compartment?.deckId ?? null);
   }
 }

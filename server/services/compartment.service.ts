@@ -108,8 +108,15 @@ export class CompartmentService {
       const changes = changesBetween(compartment, fields, EDITABLE);
       if (!changes) return compartment;
       Object.assign(compartment, fields);
+      // TypeORM saves a loaded relation over its id column: move the relation with the id.
+      compartment.deck = deck;
       compartment.designationKey = designationKey(compartment.designation);
       const result = await repos.compartments.save(compartment);
+      if ('deckId' in changes) {
+        // Points on the old deck's plan mean nothing on the new one; risks follow the compartment's deck.
+        await repos.artifacts.clearPointsIn(id);
+        await repos.risks.setDeckOf('compartment', id, result.deckId);
+      }
       if ('designation' in changes || 'name' in changes) await reindexReportsOf(repos, 'compartment', id, `${result.designation} ${result.name}`);
       const what = Object.keys(changes).join(', ');
       await recordAudit(repos, actor, { action: 'update', entityType: 'compartment', entityId: id, vesselId: vessel.id, summary: `Compartment ${compartment.designation} changed (${what})`, changes });

@@ -91,3 +91,20 @@ describe('what a risk concerns', () => {
     expect(same.body.version).toBe(first.body.version);
   });
 });
+
+describe('deck filters follow the places', () => {
+  it('when an artifact moves or a compartment changes deck', async () => {
+    const gauge = (await addArtifact(curator, vesselId, { objectNumber: '2019.4.12', compartmentId: place.first, point: [200, 200] }));
+    const r = (await conservator.post('/api/v1/risks', { vesselId, statement: 'Gauge glass broken', agent: 'thieves-and-vandals', a: 3, b: 3, c: 3, artifactIds: [gauge.id] })).body;
+    expect((await curator.get(`/api/v1/risks?vesselId=${vesselId}&deckId=${place.deckId}`)).body.total).toBe(1);
+    const lower = (await curator.post(`/api/v1/vessels/${vesselId}/decks`, { name: 'Lower deck', levelCode: '2' })).body;
+    const room = (await curator.get(`/api/v1/compartments/${place.first}`)).body;
+    expect((await curator.patch(`/api/v1/compartments/${place.first}`, { deckId: lower.id, designation: '2-10-1-Q', version: room.version })).status).toBe(200);
+    // The artifact is still in its compartment but no longer on a plan point of another deck.
+    const loc = (await curator.get(`/api/v1/artifacts/${gauge.id}`)).body.location;
+    expect(loc, JSON.stringify(loc)).toMatchObject({ compartmentId: place.first, point: null, deckId: lower.id });
+    await curator.post(`/api/v1/artifacts/${gauge.id}/moves`, { compartmentId: place.second, point: null, status: 'in-place', reason: 'Moved', version: (await curator.get(`/api/v1/artifacts/${gauge.id}`)).body.version });
+    expect((await curator.get(`/api/v1/risks?vesselId=${vesselId}&deckId=${place.deckId}`)).body.items.map((x: { id: number }) => x.id)).toEqual([r.id]);
+    expect((await curator.get(`/api/v1/risks?vesselId=${vesselId}&deckId=${lower.id}`)).body.total).toBe(0);
+  });
+});

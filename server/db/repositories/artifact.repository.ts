@@ -161,6 +161,11 @@ export class ArtifactRepository {
     return this.repo.save(artifact);
   }
 
+  /** Takes the artifacts of a compartment off the plan (its deck changed); their compartment stays. */
+  async clearPointsIn(compartmentId: number) {
+    await this.repo.createQueryBuilder().update().set({ point: () => 'NULL', updatedAt: () => '"updatedAt"', version: () => '"version"' }).where('compartmentId = :compartmentId', { compartmentId }).execute();
+  }
+
   /** Carries a point to a replaced plan's pixels; not a move, so version and history stay. */
   async setPoint(id: number, point: Point) {
     await this.repo.createQueryBuilder().update().set({ point: () => ':point', updatedAt: () => '"updatedAt"', version: () => '"version"' }).setParameter('point', JSON.stringify(point)).where('id = :id', { id }).execute();

@@ -42,6 +42,10 @@ export class RiskRepository {
     return this.repo.save(risk);
   }
 
+  async setDeckOf(subjectType: 'artifact' | 'compartment', subjectId: number, deckId: number | null) {
+    await this.subjects.update({ subjectType, subjectId }, { deckId });
+  }
+
   countLinkedTo(subjectType: 'artifact' | 'compartment', subjectId: number) {
     return this.subjects.countBy({ subjectType, subjectId });
   }
