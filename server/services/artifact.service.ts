@@ -1,3 +1,4 @@
+import { daysAgo, latestPastDay } from '../../shared/calc/days.js';
 import { checkObjectNumber, objectNumberSortKey } from '../../shared/calc/object-number.js';
 import { CATEGORY_LABELS, type ArtifactsQuery, type UpdateArtifactBody, type archiveArtifactBody, type createArtifactBody, type moveArtifactBody } from '../../shared/schemas/artifacts.js';
 import type { z } from 'zod';
@@ -42,14 +43,10 @@ export function searchDocumentOf(artifact: ArtifactEntity): SearchDocument {
   };
 }
 
-function today(): string {
-  return new Date().toISOString().slice(0, 10);
-}
-
 /** The date of a move: today when not given; never after tomorrow (UTC), whatever the time zone. */
 function moveDate(movedOn: string | undefined): string {
-  if (!movedOn) return today();
-  if (movedOn > new Date(Date.now() + 86_400_000).toISOString().slice(0, 10)) {
+  if (!movedOn) return daysAgo(0);
+  if (movedOn > latestPastDay()) {
     throw new UnprocessableError('A move cannot be dated in the future.', { movedOn: 'This date is in the future.' });
   }
   return movedOn;
@@ -83,7 +80,7 @@ export async function insertArtifact(repos: Repositories, vesselId: number, inpu
   await repos.artifactMoves.create({
     artifactId: artifact.id,
     kind: 'recorded',
-    movedOn: today(),
+    movedOn: daysAgo(0),
     fromStatus: null,
     fromCompartmentId: null,
     fromLabel: null,

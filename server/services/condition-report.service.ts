@@ -152,11 +152,16 @@ export class ConditionReportService {
   async list(query: ConditionReportsQuery, viewer: Express.User) {
     const repos = this.store.repos;
     const page = await repos.conditionReports.page(query, can(viewer.role, 'conditionReport', 'readFindings'));
-    const items = [];
-    for (const report of page.items) {
-      const amendment = await repos.conditionReports.amendmentOf(report.id);
-      items.push(presentReportSummary(report, (await this.subjectOf(repos, report.subjectType, report.subjectId)).label, amendment?.status === 'submitted' ? amendment.id : null, amendment?.id ?? null));
-    }
+    // One query each for the page's amendments and subject labels, not a few per row.
+    const amendments = await repos.conditionReports.amendmentsOf(page.items.map((r) => r.id));
+    const ofType = (type: 'artifact' | 'compartment') => page.items.filter((r) => r.subjectType === type).map((r) => r.subjectId);
+    const artifactLabels = await repos.artifacts.labels(ofType('artifact'));
+    const compartmentLabels = await repos.compartments.labels(ofType('compartment'));
+    const items = page.items.map((report) => {
+      const amendment = amendments.get(report.id);
+      const label = (report.subjectType === 'artifact' ? artifactLabels.get(report.subjectId) : compartmentLabels.get(report.subjectId)?.label) ?? `${report.subjectType} ${report.subjectId}`;
+      return presentReportSummary(report, label, amendment?.status === 'submitted' ? amendment.id : null, amendment?.id ?? null);
+    });
     return { ...page, items };
   }
 

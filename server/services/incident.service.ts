@@ -5,6 +5,7 @@ import type { z } from 'zod';
 import type { IncidentSubjectEntity } from '../db/entities/incident-subject.entity.js';
 import type { IncidentEntity } from '../db/entities/incident.entity.js';
 import type { Repositories, Store } from '../db/store.js';
+import { latestPastDay } from '../../shared/calc/days.js';
 import { can } from '../../shared/permissions.js';
 import { NotFoundError, UnprocessableError } from '../http/errors.js';
 import { changesBetween, recordAudit, type Actor } from './audit.service.js';
@@ -24,7 +25,7 @@ const FINDING_OF: Record<IncidentKind, { agent: Agent; damageType: DamageType }>
 
 /** Found on: not after tomorrow (UTC, whatever the time zone); it happened on or before it was found. */
 function checkDates(foundOn: string, occurredOn: string | null) {
-  if (foundOn > new Date(Date.now() + 86_400_000).toISOString().slice(0, 10)) throw new UnprocessableError('An incident cannot be found in the future.', { foundOn: 'This date is in the future.' });
+  if (foundOn > latestPastDay()) throw new UnprocessableError('An incident cannot be found in the future.', { foundOn: 'This date is in the future.' });
   if (occurredOn && occurredOn > foundOn) throw new UnprocessableError('It cannot have happened after it was found.', { occurredOn: 'After the day it was found.' });
 }
 
@@ -36,11 +37,17 @@ function checkDates(foundOn: string, occurredOn: string | null) {
 export class IncidentService {
   constructor(private readonly store: Store, private readonly reports: ConditionReportService, private readonly alerts: ConditionAlerts) {}
 
-  private async present(incident: IncidentEntity, subjects: IncidentSubjectEntity[], viewer: Express.User): Promise<Incident> {
+  /** Incidents with what they affected; the labels of all of them come in two queries. */
+  private async present(incidents: IncidentEntity[], viewer: Express.User): Promise<Incident[]> {
     const repos = this.store.repos;
+    const subjects = await repos.incidents.subjectsOf(incidents.map((i) => i.id));
+    const artifactLabels = await repos.artifacts.labels(subjects.filter((s) => s.subjectType === 'artifact').map((s) => s.subjectId));
+    const compartmentLabels = await repos.compartments.labels(subjects.filter((s) => s.subjectType === 'compartment').map((s) => s.subjectId));
+    return incidents.map((incident) => this.presentOne(incident, subjects, artifactLabels, compartmentLabels, viewer));
+  }
+
+  private presentOne(incident: IncidentEntity, subjects: IncidentSubjectEntity[], artifactLabels: Map<number, string>, compartmentLabels: Map<number, { label: string }>, viewer: Express.User): Incident {
     const mine = subjects.filter((x) => x.incidentId === incident.id);
-    const artifactLabels = await repos.artifacts.labels(mine.filter((s) => s.subjectType === 'artifact').map((s) => s.subjectId));
-    const compartmentLabels = await repos.compartments.labels(mine.filter((s) => s.subjectType === 'compartment').map((s) => s.subjectId));
     const artifacts = mine.filter((s) => s.subjectType === 'artifact').map((s) => ({ id: s.subjectId, label: artifactLabels.get(s.subjectId) ?? `Artifact ${s.subjectId}` }));
     const compartments = mine.filter((s) => s.subjectType === 'compartment').map((s) => ({ id: s.subjectId, label: compartmentLabels.get(s.subjectId)?.label ?? `Compartment ${s.subjectId}` }));
     return {
@@ -67,16 +74,13 @@ export class IncidentService {
 
   async list(query: IncidentsQuery, viewer: Express.User) {
     const page = await this.store.repos.incidents.page(query);
-    const subjects = await this.store.repos.incidents.subjectsOf(page.items.map((i) => i.id));
-    const items = [];
-    for (const incident of page.items) items.push(await this.present(incident, subjects, viewer));
-    return { ...page, items };
+    return { ...page, items: await this.present(page.items, viewer) };
   }
 
   async get(id: number, viewer: Express.User) {
     const incident = await this.store.repos.incidents.findById(id);
     if (!incident) throw new NotFoundError('The incident');
-    return this.present(incident, await this.store.repos.incidents.subjectsOf([id]), viewer);
+    return (await this.present([incident], viewer))[0]!;
   }
 
   private async checkSubjects(repos: Repositories, vesselId: number, artifactIds: number[], compartmentIds: number[]) {

@@ -35,6 +35,13 @@ export class ConditionReportRepository {
   }
 
   /** The draft that amends a report, if one is open. */
+  /** The amendments of the given reports, in one query. */
+  async amendmentsOf(ids: number[]): Promise<Map<number, ConditionReportEntity>> {
+    if (ids.length === 0) return new Map();
+    const rows = await this.repo.findBy({ supersedesId: In(ids) });
+    return new Map(rows.map((r) => [r.supersedesId!, r]));
+  }
+
   amendmentOf(id: number) {
     return this.repo.findOneBy({ supersedesId: id });
   }

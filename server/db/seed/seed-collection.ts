@@ -1,6 +1,7 @@
 import { writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import type { DataSource } from 'typeorm';
+import { daysAgo } from '../../../shared/calc/days.js';
 import { pointInPolygon, type Point } from '../../../shared/calc/geometry.js';
 import { objectNumberSortKey } from '../../../shared/calc/object-number.js';
 import type { Config } from '../../config.js';
@@ -13,8 +14,6 @@ import { Store } from '../store.js';
 import { DEMO_ARTIFACTS } from './demo-collection.js';
 import { demoPhoto } from './demo-photos.js';
 
-const DAY = 86_400_000;
-const dateOf = (daysAgo: number) => new Date(Date.now() - daysAgo * DAY).toISOString().slice(0, 10);
 
 /** Spreads the n-th artifact of a compartment over a grid inside its outline. */
 function pointIn(outline: Point[], index: number): Point | null {
@@ -75,7 +74,7 @@ export async function seedDemoCollection(dataSource: DataSource, config: Config)
       });
       let place = { status: artifact.status, room, point };
       await repos.artifactMoves.create({
-        artifactId: artifact.id, kind: 'recorded', movedOn: dateOf(demo.recordedDaysAgo),
+        artifactId: artifact.id, kind: 'recorded', movedOn: daysAgo(demo.recordedDaysAgo),
         fromStatus: null, fromCompartmentId: null, fromLabel: null, fromPoint: null,
         toStatus: place.status, toCompartmentId: place.room?.id ?? null, toLabel: compartmentLabel(place.room), toPoint: point,
         reason: 'Recorded in the collection', actorId: curator.id,
@@ -87,7 +86,7 @@ export async function seedDemoCollection(dataSource: DataSource, config: Config)
         const samePlace = room2?.id === place.room?.id;
         const point2 = samePlace ? place.point : room2?.outline && move.status === 'in-place' ? pointIn(room2.outline, 11) : null;
         await repos.artifactMoves.create({
-          artifactId: artifact.id, kind: move.status === 'deaccessioned' ? 'deaccessioned' : samePlace ? 'status' : 'moved', movedOn: dateOf(demo.recordedDaysAgo - move.after),
+          artifactId: artifact.id, kind: move.status === 'deaccessioned' ? 'deaccessioned' : samePlace ? 'status' : 'moved', movedOn: daysAgo(demo.recordedDaysAgo - move.after),
           fromStatus: place.status, fromCompartmentId: place.room?.id ?? null, fromLabel: compartmentLabel(place.room), fromPoint: place.point,
           toStatus: move.status, toCompartmentId: room2?.id ?? null, toLabel: compartmentLabel(room2), toPoint: point2,
           reason: move.reason, actorId: curator.id,
@@ -97,7 +96,7 @@ export async function seedDemoCollection(dataSource: DataSource, config: Config)
       Object.assign(artifact, { status: place.status, compartmentId: place.room?.id ?? null, point: place.point, deaccessionReason: demo.deaccessionReason ?? null });
       await repos.artifacts.save(artifact);
       await repos.search.put(searchDocumentOf(artifact));
-      if (demo.photo) photos.push({ artifactId: artifact.id, kind: demo.photo, seed: i + 3, taken: new Date(Date.now() - (demo.recordedDaysAgo - 2) * DAY), name: demo.name });
+      if (demo.photo) photos.push({ artifactId: artifact.id, kind: demo.photo, seed: i + 3, taken: new Date(`${daysAgo(demo.recordedDaysAgo - 2)}T10:30:00Z`), name: demo.name });
     }
   });
 

@@ -1,4 +1,5 @@
 import type { DataSource } from 'typeorm';
+import { daysAgo } from '../../../shared/calc/days.js';
 import type { Config } from '../../config.js';
 import type { ConditionAlerts } from '../../services/condition-alerts.js';
 import { ConditionReportService } from '../../services/condition-report.service.js';
@@ -8,8 +9,6 @@ import { FileStore } from '../../storage/file-store.js';
 import { Store } from '../store.js';
 import { DEMO_INCIDENTS, DEMO_REPORTS, DEMO_RISKS } from './demo-condition.js';
 
-const DAY = 86_400_000;
-const dateOf = (daysAgo: number) => new Date(Date.now() - daysAgo * DAY).toISOString().slice(0, 10);
 
 /** The demo seeds no mail: nobody needs alerts about invented events. */
 const quiet = { tellCurators: async () => undefined } as unknown as ConditionAlerts;
@@ -38,7 +37,7 @@ export async function seedDemoCondition(dataSource: DataSource, config: Config):
 
   for (const demo of DEMO_REPORTS) {
     const subject = await subjectOf(demo.subject);
-    let report = await reports.create({ ...subject, inspectedOn: dateOf(demo.daysAgo), method: 'close-visual', temperatureC: demo.temperature ?? null, relativeHumidity: demo.humidity ?? null, summary: demo.summary }, conservator, actor);
+    let report = await reports.create({ ...subject, inspectedOn: daysAgo(demo.daysAgo), method: 'close-visual', temperatureC: demo.temperature ?? null, relativeHumidity: demo.humidity ?? null, summary: demo.summary }, conservator, actor);
     for (const f of demo.findings) {
       report = await reports.addFinding(
         report.id,
@@ -77,7 +76,7 @@ export async function seedDemoCondition(dataSource: DataSource, config: Config):
         vesselId: vessel.id,
         kind: demo.kind,
         title: demo.title,
-        foundOn: dateOf(demo.daysAgo),
+        foundOn: daysAgo(demo.daysAgo),
         occurredOn: null,
         description: demo.description,
         reportedTo: demo.reportedTo,
