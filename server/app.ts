@@ -144,8 +144,25 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
           'upgrade-insecure-requests': config.secureCookies ? [] : null,
         },
       },
+      strictTransportSecurity: false,
     }),
   );
+  // HSTS on a plain-http answer is meaningless (RFC 6797, 7.2) and would pin a misconfigured host
+  app.use((req, res, next) => {
+    if (req.secure) res.setHeader('Strict-Transport-Security', 'max-age=31536000; includeSubDomains');
+    next();
+  });
+  // The client is served before the session middleware, so its files never carry or refresh a cookie
+  const indexHtml = path.join(config.clientDir, 'index.html');
+  const hasClient = existsSync(indexHtml);
+  if (hasClient) {
+    app.use('/assets', express.static(path.join(config.clientDir, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }));
+    app.use(express.static(config.clientDir, { index: false }));
+    app.get(/^(?!\/api(?:\/|$)).*/, (_req, res) => {
+      res.setHeader('Cache-Control', 'no-cache');
+      res.sendFile(indexHtml);
+    });
+  }
   app.use(express.json({ limit: '1mb' }));
   app.use('/api/v1', (req, _res, next) => {
     // req.is() is null without a body and false for a body of another type; a proxy may send an empty one
@@ -177,15 +194,6 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
   app.use('/api/v1', csrf.csrfSynchronisedProtection, api.router);
   app.use('/api', apiNotFound);
 
-  const indexHtml = path.join(config.clientDir, 'index.html');
-  if (existsSync(indexHtml)) {
-    app.use('/assets', express.static(path.join(config.clientDir, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }));
-    app.use(express.static(config.clientDir, { index: false }));
-    app.get('/*splat', (_req, res) => {
-      res.setHeader('Cache-Control', 'no-cache');
-      res.sendFile(indexHtml);
-    });
-  }
   app.use(errorHandler);
 
   return {

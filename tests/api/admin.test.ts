@@ -65,9 +65,19 @@ describe('outbox', () => {
 });
 
 describe('service routes', () => {
-  it('GET /health reports the database and the fakes', async () => {
+  it('GET /health tells anonymous callers and staff only the status', async () => {
     ctx = await createTestApp();
-    const res = await new Client(ctx.app).get('/api/v1/health');
+    const anonymous = await new Client(ctx.app).get('/api/v1/health');
+    expect(anonymous.status).toBe(200);
+    expect(anonymous.body).toEqual({ status: 'ok' });
+    const { client: curator } = await signedInAs(ctx.app, ctx.store, 'curator');
+    expect((await curator.get('/api/v1/health')).body).toEqual({ status: 'ok' });
+  });
+
+  it('GET /health reports the database and the fakes to administrators', async () => {
+    ctx = await createTestApp();
+    const { client: admin } = await signedInAs(ctx.app, ctx.store, 'admin');
+    const res = await admin.get('/api/v1/health');
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ status: 'ok', database: { status: 'ok', pendingMigrations: 0, journalMode: 'wal' }, fakes: { mail: { running: true, port: ctx.fakeMail.port } } });
   });
