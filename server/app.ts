@@ -1,5 +1,6 @@
 import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
+import cookieParser from 'cookie-parser';
 import express, { type Express, type RequestHandler } from 'express';
 import session from 'express-session';
 import helmet from 'helmet';
@@ -96,7 +97,7 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
 
   const auth = new AuthService(store, config);
   const passport = createPassport(auth);
-  const csrf = createCsrf();
+  const csrf = createCsrf({ secret: config.sessionSecret, secureCookies: config.secureCookies });
   const settings = new SettingsService(store);
   const vessels = new VesselService(store);
   const files = new FileStore(config.uploadsDir);
@@ -164,6 +165,7 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
     });
   }
   app.use(express.json({ limit: '1mb' }));
+  app.use(cookieParser());
   app.use('/api/v1', (req, _res, next) => {
     // req.is() is null without a body and false for a body of another type; a proxy may send an empty one
     const empty = req.headers['content-length'] === '0' && !req.headers['transfer-encoding'];
@@ -191,7 +193,7 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
     res.setHeader('Cache-Control', 'no-store');
     next();
   });
-  app.use('/api/v1', csrf.csrfSynchronisedProtection, api.router);
+  app.use('/api/v1', csrf.protect, api.router);
   app.use('/api', apiNotFound);
 
   app.use(errorHandler);

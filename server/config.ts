@@ -31,6 +31,7 @@ export interface Config {
   loginLimitPerAccount: number;
   loginLimitPerAddress: number;
   loginWindowMinutes: number;
+  csrfLimitPerMinute: number;
   mail: MailConfig;
   /** Port for the local fake mail server (0 picks a free one). */
   fakeMailPort: number;
@@ -92,6 +93,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
     loginLimitPerAccount: int(env.LOGIN_LIMIT_PER_ACCOUNT, 5, 'LOGIN_LIMIT_PER_ACCOUNT'),
     loginLimitPerAddress: int(env.LOGIN_LIMIT_PER_ADDRESS, 30, 'LOGIN_LIMIT_PER_ADDRESS'),
     loginWindowMinutes: int(env.LOGIN_WINDOW_MINUTES, 15, 'LOGIN_WINDOW_MINUTES'),
+    csrfLimitPerMinute: int(env.CSRF_LIMIT_PER_MINUTE, 60, 'CSRF_LIMIT_PER_MINUTE'),
     mail: {
       host: env.SMTP_HOST || null,
       port: int(env.SMTP_PORT, 587, 'SMTP_PORT'),

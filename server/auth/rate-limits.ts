@@ -18,6 +18,7 @@ export interface SignInLimits {
   perAccount: RequestHandler;
   resetRequests: RequestHandler;
   passwordChange: RequestHandler;
+  csrfTokens: RequestHandler;
 }
 
 function accountKey(req: Request): string {
@@ -66,6 +67,13 @@ export function signInLimits(config: Config): SignInLimits {
       legacyHeaders: false,
       keyGenerator: (req) => `password-change:${req.user?.id ?? 'none'}`,
       handler: limited('wrong current passwords'),
+    }),
+    csrfTokens: rateLimit({
+      windowMs: 60_000,
+      limit: config.csrfLimitPerMinute,
+      standardHeaders: 'draft-8',
+      legacyHeaders: false,
+      handler: limited('security token requests from this network address'),
     }),
     resetRequests: rateLimit({
       windowMs,

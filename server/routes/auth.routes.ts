@@ -15,7 +15,7 @@ export interface AuthRouteDeps {
   passwords: PasswordService;
   passport: Passport;
   limits: SignInLimits;
-  generateCsrfToken: (req: Request, overwrite?: boolean) => string;
+  generateCsrfToken: (req: Request, res: Response, overwrite?: boolean) => string;
 }
 
 const message = z.object({ message: z.string() }).meta({ id: 'Message' });
@@ -39,7 +39,9 @@ export function authRoutes(api: ApiRouter, deps: AuthRouteDeps) {
     summary: 'A CSRF token for this session, to send in the x-csrf-token header of every change',
     access: anyone,
     response: csrfTokenResponse,
-    handler: ({ req }) => ({ csrfToken: deps.generateCsrfToken(req) }),
+    before: [deps.limits.csrfTokens],
+    errors: [429],
+    handler: ({ req, res }) => ({ csrfToken: deps.generateCsrfToken(req, res) }),
   });
 
   api.route({
@@ -60,7 +62,7 @@ export function authRoutes(api: ApiRouter, deps: AuthRouteDeps) {
       }
       await new Promise<void>((resolve, reject) => req.logIn(user, (err) => (err ? reject(err) : resolve())));
       req.session.signedInAt = Date.now();
-      const csrfToken = deps.generateCsrfToken(req, true);
+      const csrfToken = deps.generateCsrfToken(req, res, true);
       await deps.auth.recordSignIn(user, actorOf(req));
       return { ...deps.auth.me(user, req.session.cookie.expires ?? undefined), csrfToken };
     },

@@ -77,8 +77,11 @@ describe('POST /api/v1/auth/login', () => {
     const user = await buildUser(ctx.store, { role: 'conservator' });
     const client = new Client(ctx.app);
     const csrfRes = await client.agent.get('/api/v1/auth/csrf');
-    const before = sessionCookie(csrfRes)!.split(';')[0];
+    expect(sessionCookie(csrfRes)).toBeUndefined();
     client.csrf = csrfRes.body.csrfToken;
+    const first = await client.signIn(user.email);
+    const before = sessionCookie(first)!.split(';')[0];
+    // signing in again on a live session gives it a new id (OWASP ASVS 4.0.3, 3.2.1)
     const res = await client.signIn(user.email);
     expect(res.status).toBe(200);
     const after = sessionCookie(res)!;
@@ -93,9 +96,11 @@ describe('POST /api/v1/auth/login', () => {
     expect(res.body.user.permissions.vessel).toContain('read');
     expect(res.body.user.permissions.user).toEqual([]);
     expect(res.body.session).toMatchObject({ idleTimeoutMinutes: 30, absoluteTimeoutHours: 12 });
-    // The old CSRF token belonged to the old session.
-    const stale = await client.agent.post('/api/v1/auth/password').set('x-csrf-token', csrfRes.body.csrfToken).send({});
-    expect(stale.body.error.code).toBe('csrf');
+    // The old CSRF tokens belonged to the anonymous caller and to the old session.
+    for (const old of [csrfRes.body.csrfToken, first.body.csrfToken]) {
+      const stale = await client.agent.post('/api/v1/auth/password').set('x-csrf-token', old).send({});
+      expect(stale.body.error.code).toBe('csrf');
+    }
   });
 
   it('marks the cookie Secure when served over HTTPS', async () => {
@@ -103,11 +108,12 @@ describe('POST /api/v1/auth/login', () => {
     const user = await buildUser(ctx.store);
     const { default: request } = await import('supertest');
     const csrf = await request(ctx.app).get('/api/v1/auth/csrf').set('x-forwarded-proto', 'https');
-    expect(sessionCookie(csrf)).toMatch(/Secure/);
+    const csrfCookie = (csrf.headers['set-cookie'] as unknown as string[]).find((c) => c.startsWith('shipkeeper.csrf='))!;
+    expect(csrfCookie).toMatch(/Secure/);
     const res = await request(ctx.app)
       .post('/api/v1/auth/login')
       .set('x-forwarded-proto', 'https')
-      .set('Cookie', sessionCookie(csrf)!.split(';')[0]!)
+      .set('Cookie', csrfCookie.split(';')[0]!)
       .set('x-csrf-token', csrf.body.csrfToken)
       .send({ email: user.email, password: TEST_PASSWORD });
     expect(res.status).toBe(200);
@@ -196,5 +202,32 @@ describe('sessions', () => {
     expect((await here.get('/api/v1/auth/me')).status).toBe(200);
     expect((await elsewhere.get('/api/v1/auth/me')).status).toBe(401);
     expect((await new Client(ctx.app).signIn(user.email, 'quay-barnacle-pressure-dial')).status).toBe(200);
+  });
+});
+
+describe('GET /api/v1/auth/csrf for anonymous callers', () => {
+  it('stores no session, yet its token protects an anonymous change', async () => {
+    ctx = await createTestApp({ csrfLimitPerMinute: 1000 });
+    const sessionsBefore = Number((await ctx.dataSource.query('SELECT COUNT(*) AS n FROM sessions'))[0].n);
+    for (let i = 0; i < 200; i++) await new Client(ctx.app).fetchCsrf();
+    const sessionsAfter = Number((await ctx.dataSource.query('SELECT COUNT(*) AS n FROM sessions'))[0].n);
+    expect(sessionsAfter - sessionsBefore).toBe(0);
+    // the token works only with the cookie it came with
+    const client = new Client(ctx.app);
+    await client.fetchCsrf();
+    const other = new Client(ctx.app);
+    await other.fetchCsrf();
+    const crossed = await other.agent.post('/api/v1/auth/password-reset').set('x-csrf-token', client.csrf).send({ email: 'a@example.test' });
+    expect(crossed.status).toBe(403);
+    expect(crossed.body.error.code).toBe('csrf');
+    expect((await client.post('/api/v1/auth/password-reset', { email: 'a@example.test' })).status).toBe(202);
+  });
+
+  it('is rate-limited per network address', async () => {
+    ctx = await createTestApp({ csrfLimitPerMinute: 5 });
+    for (let i = 0; i < 5; i++) expect((await new Client(ctx.app).agent.get('/api/v1/auth/csrf')).status).toBe(200);
+    const res = await new Client(ctx.app).agent.get('/api/v1/auth/csrf');
+    expect(res.status).toBe(429);
+    expect(res.body.error.message).toMatch(/Too many security token requests/);
   });
 });

@@ -56,6 +56,7 @@ export default async function setup(project: TestProject) {
       UPLOADS_DIR: path.join(dataDir, 'uploads'),
       FAKE_SMTP_PORT: '0',
       BCRYPT_COST: '8',
+      CSRF_LIMIT_PER_MINUTE: '1000',
       SMTP_HOST: '',
     },
     stdio: ['ignore', 'pipe', 'pipe'],
