@@ -1,4 +1,5 @@
 import { ROLES, type Role } from './roles.js';
+import type { MediaOwnerType } from './schemas/media.js';
 
 /**
  * Who may do what, declared once per resource and action. The server enforces it on every
@@ -43,6 +44,24 @@ export function can<R extends Resource>(role: Role | null | undefined, resource:
   if (!role) return false;
   const allowed = (PERMISSIONS[resource] as Record<string, readonly Role[]>)[action];
   return allowed ? allowed.includes(role) : false;
+}
+
+/**
+ * The record a file belongs to, by owner type, and the action whose roles may read its files. Files
+ * inherit the read rule of their owner: a condition report's photos and documents are evidence of
+ * its findings (their captions describe them), so they follow `readFindings`, not `read`.
+ */
+export const MEDIA_OWNERS = {
+  artifact: { resource: 'artifact', read: 'read' },
+  compartment: { resource: 'compartment', read: 'read' },
+  incident: { resource: 'incident', read: 'read' },
+  'condition-report': { resource: 'conditionReport', read: 'readFindings' },
+} as const satisfies Record<MediaOwnerType, { resource: Resource; read: string }>;
+
+/** Whether the role may see the files of this kind of record: listed, described or served, in any response. */
+export function canReadMediaOf(role: Role | null | undefined, ownerType: MediaOwnerType): boolean {
+  const owner = MEDIA_OWNERS[ownerType];
+  return can(role, 'media', 'read') && can(role, owner.resource, owner.read as never);
 }
 
 /** Every resource and the actions the role may take on it; sent to the client with the user. */

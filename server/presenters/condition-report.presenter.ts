@@ -58,7 +58,7 @@ export function presentReport(report: ConditionReportEntity, subjectLabel: strin
     temperatureC: report.temperatureC,
     relativeHumidity: report.relativeHumidity,
     computedGrade: report.computedGrade,
-    gradeBecause: gradeFromFindings(findings).because,
+    gradeBecause: readFindings ? gradeFromFindings(findings).because : null,
     gradeOverride: report.gradeOverride,
     overrideReason: readFindings ? report.overrideReason : null,
     findings: readFindings ? findings.map(presentFinding) : null,

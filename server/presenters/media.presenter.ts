@@ -1,4 +1,4 @@
-import { can } from '../../shared/permissions.js';
+import { can, MEDIA_OWNERS } from '../../shared/permissions.js';
 import type { Media, MediaOwnerType } from '../../shared/schemas/media.js';
 import type { MediaEntity } from '../db/entities/media.entity.js';
 
@@ -6,11 +6,9 @@ export function mediaUrl(id: number, variant: 'thumb' | 'display' | 'original'):
   return `/api/v1/media/${id}/${variant}`;
 }
 
-const OWNER_RESOURCE: Record<MediaOwnerType, 'artifact' | 'compartment' | 'conditionReport' | 'incident'> = { artifact: 'artifact', compartment: 'compartment', 'condition-report': 'conditionReport', incident: 'incident' };
-
 /** Whether a role may add, change or delete files on this kind of record. */
 export function canChangeMediaOf(role: Express.User['role'], ownerType: MediaOwnerType, action: 'create' | 'update' | 'delete'): boolean {
-  return can(role, 'media', action) && can(role, OWNER_RESOURCE[ownerType], 'update');
+  return can(role, 'media', action) && can(role, MEDIA_OWNERS[ownerType].resource, 'update');
 }
 
 /** `locked`: the record no longer changes (a submitted report), so neither do its files. */

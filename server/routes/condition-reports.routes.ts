@@ -23,12 +23,12 @@ export function conditionReportRoutes(api: ApiRouter, reports: ConditionReportSe
     method: 'get',
     path: '/condition-history',
     tag,
-    summary: "An artifact's or compartment's reports and incidents over time, with grades, and its photos by date for comparison",
+    summary: "An artifact's or compartment's reports and incidents over time, with grades, and its photos by date for comparison (its reports' photos for the roles that read findings)",
     access: allowed('conditionReport', 'read'),
     query: historyQuery,
     response: conditionHistory,
     errors: [404],
-    handler: ({ query }) => reports.history(query.subjectType, query.subjectId),
+    handler: ({ req, query }) => reports.history(query.subjectType, query.subjectId, req.user!),
   });
 
   api.route({

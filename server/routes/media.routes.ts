@@ -14,7 +14,7 @@ export function mediaRoutes(api: ApiRouter, service: MediaService, options: { in
     method: 'get',
     path: '/media',
     tag,
-    summary: 'The photos and documents of a record (`ownerType` and `ownerId`)',
+    summary: 'The photos and documents of a record (`ownerType` and `ownerId`); files follow their owner’s read rule, so a condition report’s are for the roles that read findings (403 otherwise)',
     access: allowed('media', 'read'),
     query: mediaOwnerQuery,
     response: mediaList,
@@ -77,13 +77,13 @@ export function mediaRoutes(api: ApiRouter, service: MediaService, options: { in
     method: 'get',
     path: '/media/:id/:variant',
     tag,
-    summary: 'A file: `thumb` (320 px) and `display` (1600 px) WebP without metadata, or the `original` as uploaded (staff only)',
+    summary: 'A file: `thumb` (320 px) and `display` (1600 px) WebP without metadata, or the `original` as uploaded (staff only); the same read rule as the file’s owner',
     access: allowed('media', 'read'),
     params: mediaFileParams,
     produces: 'image/webp',
     errors: [404],
-    handler: async ({ params, res }) => {
-      const file = await service.file(params.id, params.variant);
+    handler: async ({ req, params, res }) => {
+      const file = await service.file(params.id, params.variant, req.user!);
       res.setHeader('Cache-Control', 'private, max-age=31536000, immutable');
       res.setHeader('Content-Type', file.type);
       res.setHeader('Content-Disposition', `inline; filename="${file.name.replace(/[^\w.\- ]/g, '_')}"`);

@@ -14,6 +14,7 @@ import { changesBetween, recordAudit, type Actor } from './audit.service.js';
 import type { FileStore } from '../storage/file-store.js';
 import type { ConditionAlerts } from './condition-alerts.js';
 import { conditionReportPdf, type PdfPhoto } from './condition-report-pdf.js';
+import { readableMedia } from './media-access.js';
 import { derivativeFile } from './media-derivatives.js';
 import { staleEditError } from './stale-edit.js';
 
@@ -123,8 +124,8 @@ export class ConditionReportService {
     return { pdf, fileName: `condition-report-${id}-rev${report.revision}.pdf` };
   }
 
-  /** A subject's reports and incidents over time, and its photos (its own and its reports') by date. */
-  async history(subjectType: 'artifact' | 'compartment', subjectId: number) {
+  /** A subject's reports and incidents over time, and its photos (its own and its reports', as the viewer may read them) by date. */
+  async history(subjectType: 'artifact' | 'compartment', subjectId: number, viewer: Express.User) {
     const repos = this.store.repos;
     const subject = await this.subjectOf(repos, subjectType, subjectId).catch(() => {
       throw new NotFoundError(subjectType === 'artifact' ? 'The artifact' : 'The compartment');
@@ -137,7 +138,7 @@ export class ConditionReportService {
       ...incidents.map((i) => ({ kind: 'incident' as const, id: i.id, date: i.foundOn, title: i.title, incidentKind: i.kind })),
     ].sort((a, b) => b.date.localeCompare(a.date) || b.id - a.id);
     const photos = [];
-    const owned = [{ ownerType: subjectType, ownerId: subjectId, report: null as (typeof reports)[number] | null }, ...reports.map((r) => ({ ownerType: 'condition-report' as const, ownerId: r.id, report: r }))];
+    const owned = readableMedia(viewer, [{ ownerType: subjectType, ownerId: subjectId, report: null as (typeof reports)[number] | null }, ...reports.map((r) => ({ ownerType: 'condition-report' as const, ownerId: r.id, report: r }))]);
     for (const owner of owned) {
       for (const media of await repos.media.forOwner(owner.ownerType, owner.ownerId)) {
         if (media.kind !== 'photo') continue;

@@ -11,6 +11,7 @@ import type { FileStore } from '../storage/file-store.js';
 import { sha256File } from '../storage/hash-file.js';
 import { changesBetween, recordAudit, type Actor } from './audit.service.js';
 import { staleEditError } from './stale-edit.js';
+import { assertMayReadMediaOf } from './media-access.js';
 import { derivativeFile, makeDerivatives, type PhotoFacts } from './media-derivatives.js';
 import type { UploadedFile } from './plan.service.js';
 
@@ -64,6 +65,7 @@ export class MediaService {
   }
 
   async list(query: MediaOwnerQuery, viewer: Express.User) {
+    assertMayReadMediaOf(viewer, query.ownerType);
     const owner = await this.ownerOf(this.store.repos, query.ownerType, query.ownerId);
     return (await this.store.repos.media.forOwner(query.ownerType, query.ownerId)).map((m) => presentMedia(m, viewer, owner.locked));
   }
@@ -71,13 +73,15 @@ export class MediaService {
   async get(id: number, viewer: Express.User) {
     const media = await this.store.repos.media.findById(id);
     if (!media) throw new NotFoundError('The file');
+    assertMayReadMediaOf(viewer, media.ownerType);
     return presentMedia(media, viewer, (await this.ownerOf(this.store.repos, media.ownerType, media.ownerId)).locked);
   }
 
   /** The file to send for a variant, with its type and a download name. */
-  async file(id: number, variant: 'thumb' | 'display' | 'original') {
+  async file(id: number, variant: 'thumb' | 'display' | 'original', viewer: Express.User) {
     const media = await this.store.repos.media.findById(id);
     if (!media) throw new NotFoundError('The file');
+    assertMayReadMediaOf(viewer, media.ownerType);
     if (variant !== 'original' && media.kind !== 'photo') throw new NotFoundError('A preview of this file');
     if (variant === 'original') {
       return { path: this.files.path(path.join(media.storageKey, `original.${EXTENSIONS[media.mimeType]}`)), type: media.mimeType, name: media.fileName };

@@ -182,7 +182,8 @@ export const conditionReport = conditionReportSummary
     temperatureC: z.number().nullable(),
     relativeHumidity: z.number().nullable(),
     computedGrade: z.enum(GRADES),
-    gradeBecause: z.string(),
+    /** The grade's reasoning (from the findings) and the override's: null for roles that read summaries only. */
+    gradeBecause: z.string().nullable(),
     gradeOverride: z.enum(GRADES).nullable(),
     overrideReason: z.string().nullable(),
     /** Null for roles that read summaries only. */
