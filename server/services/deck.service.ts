@@ -91,7 +91,7 @@ export class DeckService {
           record = { method: 'frames', a: body.a, b: body.b, realMetres: body.frameSpaces * body.frameSpacingMetres, frameSpaces: body.frameSpaces, frameSpacingMetres: body.frameSpacingMetres };
         }
       } catch (err) {
-        if (err instanceof CalibrationError) throw new UnprocessableError(err.message);
+        if (err instanceof CalibrationError) throw new UnprocessableError(err.message, { [err.field]: err.message });
         throw err;
       }
       const changes = { metresPerUnit: { from: deck.metresPerUnit, to: metresPerUnit } };

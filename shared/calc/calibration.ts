@@ -5,21 +5,37 @@ export interface Calibration {
   metresPerUnit: number;
 }
 
-export class CalibrationError extends Error {}
+/** The longest distance one calibration may span: longer than any ship's hull (the largest ever built were under 460 m). */
+export const MAX_CALIBRATION_METRES = 1000;
+/** The shortest: one millimetre, below which a plan's scale means nothing. */
+export const MIN_CALIBRATION_METRES = 0.001;
+export const MAX_FRAME_SPACING_METRES = 10;
+
+export class CalibrationError extends Error {
+  constructor(message: string, readonly field: string) {
+    super(message);
+  }
+}
 
 /** Scale from two points clicked on the plan and the real distance between them. */
-export function calibrateFromPoints(a: Point, b: Point, realMetres: number): Calibration {
+export function calibrateFromPoints(a: Point, b: Point, realMetres: number, field = 'realMetres'): Calibration {
   const units = distance(a, b);
-  if (!(units > 0)) throw new CalibrationError('Click two different points on the plan.');
-  if (!(realMetres > 0) || !Number.isFinite(realMetres)) throw new CalibrationError('The real distance must be more than zero.');
-  return { metresPerUnit: realMetres / units };
+  if (!(units > 0) || !Number.isFinite(units)) throw new CalibrationError('Click two different points on the plan.', 'b');
+  if (!Number.isFinite(realMetres) || !(realMetres >= MIN_CALIBRATION_METRES)) throw new CalibrationError('The real distance must be at least 1 mm.', field);
+  if (realMetres > MAX_CALIBRATION_METRES) throw new CalibrationError(`The real distance must be at most ${MAX_CALIBRATION_METRES} m; no deck is longer.`, field);
+  const metresPerUnit = realMetres / units;
+  if (!Number.isFinite(metresPerUnit) || !(metresPerUnit > 0) || !(metresPerUnit * metresPerUnit > 0) || !Number.isFinite(metresPerUnit * metresPerUnit)) {
+    throw new CalibrationError('These points and this distance give no usable scale.', field);
+  }
+  return { metresPerUnit };
 }
 
 /** Scale from two frames clicked on the plan, the number of frame spaces between them and the frame spacing. */
 export function calibrateFromFrames(a: Point, b: Point, frameSpaces: number, frameSpacingMetres: number): Calibration {
-  if (!Number.isInteger(frameSpaces) || frameSpaces < 1) throw new CalibrationError('Count at least one frame space between the two frames.');
-  if (!(frameSpacingMetres > 0)) throw new CalibrationError('The frame spacing must be more than zero.');
-  return calibrateFromPoints(a, b, frameSpaces * frameSpacingMetres);
+  if (!Number.isInteger(frameSpaces) || frameSpaces < 1) throw new CalibrationError('Count at least one frame space between the two frames.', 'frameSpaces');
+  if (!Number.isFinite(frameSpacingMetres) || !(frameSpacingMetres > 0)) throw new CalibrationError('The frame spacing must be more than zero.', 'frameSpacingMetres');
+  if (frameSpacingMetres > MAX_FRAME_SPACING_METRES) throw new CalibrationError(`The frame spacing must be at most ${MAX_FRAME_SPACING_METRES} m.`, 'frameSpacingMetres');
+  return calibrateFromPoints(a, b, frameSpaces * frameSpacingMetres, 'frameSpaces');
 }
 
 export function lengthInMetres(planUnits: number, calibration: Calibration): number {

@@ -48,6 +48,25 @@ describe('decks', () => {
     expect(bad.body.error.fields.levelCode).toMatch(/main deck/);
   });
 
+  it('refuses a calibration that gives no finite, sane scale with 422 naming the field', async () => {
+    const deck = await addDeck('Main deck', '1');
+    const cases = [
+      [{ method: 'points', a: [100, 100], b: [400, 500], realMetres: 1e308 }, 'realMetres'],
+      [{ method: 'points', a: [100, 100], b: [400, 500], realMetres: 1e-300 }, 'realMetres'],
+      [{ method: 'points', a: [0, 0], b: [1e308, 1e308], realMetres: 10 }, 'a,b'],
+      [{ method: 'frames', a: [100, 100], b: [400, 100], frameSpaces: 1e12, frameSpacingMetres: 0.6 }, 'frameSpaces'],
+      [{ method: 'frames', a: [100, 100], b: [400, 100], frameSpaces: 10, frameSpacingMetres: 1e308 }, 'frameSpacingMetres'],
+    ] as const;
+    for (const [body, field] of cases) {
+      const res = await curator.post(`/api/v1/decks/${deck.id}/calibration`, { ...body, version: deck.version });
+      expect(res.status, JSON.stringify(body)).toBe(422);
+      expect(Object.keys(res.body.error.fields).join(','), JSON.stringify(body)).toBe(field);
+    }
+    const after = (await curator.get(`/api/v1/decks/${deck.id}`)).body;
+    expect(after.calibration).toBeNull();
+    expect(after.version).toBe(deck.version);
+  });
+
   it('calibrates from two points, and from frames; every figure follows', async () => {
     const deck = await addDeck('Main deck', '1');
     // 500 plan units = 50 ft = 15.24 m (1 ft = 0.3048 m, NIST SP 811), so 1 unit = 0.03048 m.

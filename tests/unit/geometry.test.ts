@@ -83,7 +83,12 @@ describe('calibration', () => {
 
   it('refuses a zero distance or a non-positive length', () => {
     expect(() => calibrateFromPoints([5, 5], [5, 5], 3)).toThrow(CalibrationError);
-    expect(() => calibrateFromPoints([0, 0], [5, 5], 0)).toThrow('more than zero');
+    expect(() => calibrateFromPoints([0, 0], [5, 5], 0)).toThrow('at least 1 mm');
+    expect(() => calibrateFromPoints([0, 0], [5, 5], 1e308)).toThrow('at most 1000 m');
+    expect(() => calibrateFromPoints([0, 0], [1e308, 1e308], 10)).toThrow('no usable scale');
+    expect(() => calibrateFromPoints([0, 0], [5, 5], Number.NaN)).toThrow(CalibrationError);
+    expect(() => calibrateFromFrames([0, 0], [5, 0], 1e9, 0.6)).toThrow('at most 1000 m');
+    expect(() => calibrateFromFrames([0, 0], [5, 0], 10, 50)).toThrow('frame spacing must be at most');
     expect(() => calibrateFromFrames([0, 0], [5, 5], 0, 0.6)).toThrow('at least one frame');
   });
 });
