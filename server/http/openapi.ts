@@ -5,7 +5,7 @@ import { PERMISSIONS } from '../../shared/permissions.js';
 import type { RouteSpec } from './api-router.js';
 
 const ERROR_TEXT: Record<number, string> = {
-  400: 'Malformed request; `fields` names what is wrong',
+  400: 'Malformed request; `fields` names what is wrong (code `malformed_upload` for a multipart body that cannot be read or a file name with control characters)',
   401: 'Not signed in',
   403: 'Role may not do this, or the CSRF token is missing or wrong (code `csrf`)',
   404: 'Not found',

@@ -44,6 +44,7 @@ export const ERROR_CODES = [
   'unsupported_media_type',
   'unprocessable',
   'invalid_characters',
+  'malformed_upload',
   'rate_limited',
   'internal',
 ] as const;
