@@ -2,7 +2,8 @@ import { Router, type Request, type RequestHandler, type Response } from 'expres
 import { z } from 'zod';
 import { errorEnvelope } from '../../shared/schemas/common.js';
 import { authorize, type Access } from './access.js';
-import { ValidationError } from './errors.js';
+import { isInvalidCharactersIssue } from '../../shared/schemas/text.js';
+import { InvalidCharactersError, ValidationError } from './errors.js';
 import { fieldsFromZodError } from './zod-fields.js';
 
 export type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
@@ -41,8 +42,15 @@ function parse<T extends z.ZodType>(schema: T | undefined, value: unknown, where
   if (!schema) return undefined;
   const result = schema.safeParse(value ?? {});
   if (!result.success) {
+    const fields = fieldsFromZodError(result.error);
+    const refused = result.error.issues.filter(isInvalidCharactersIssue);
+    if (refused.length === 1) throw new InvalidCharactersError(refused[0]!.message, fields);
+    if (refused.length > 1) {
+      const names = [...new Set(refused.map((i) => i.path.map(String).join('.') || where))];
+      throw new InvalidCharactersError(`These fields hold control or text-direction characters that cannot be stored: ${names.join(', ')}. Remove them and try again.`, fields);
+    }
     const message = where === 'body' ? 'Some fields need attention.' : `The ${where} of the request is not valid.`;
-    throw new ValidationError(fieldsFromZodError(result.error), message);
+    throw new ValidationError(fields, message);
   }
   return result.data;
 }

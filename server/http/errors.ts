@@ -55,6 +55,13 @@ export class UnprocessableError extends ApiError {
   }
 }
 
+/** Text with a control or text-direction character: 422 naming each field (the other fields' problems too). */
+export class InvalidCharactersError extends ApiError {
+  constructor(message: string, fields: Record<string, string>) {
+    super(422, 'invalid_characters', message, fields);
+  }
+}
+
 export class RateLimitedError extends ApiError {
   constructor(message: string, retryAfterSeconds: number) {
     super(429, 'rate_limited', message, undefined, retryAfterSeconds);

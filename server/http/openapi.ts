@@ -5,14 +5,14 @@ import { PERMISSIONS } from '../../shared/permissions.js';
 import type { RouteSpec } from './api-router.js';
 
 const ERROR_TEXT: Record<number, string> = {
-  400: 'Malformed request; `fields` names what is wrong',
+  400: 'Malformed request; `fields` names what is wrong (code `malformed_upload` for a multipart body that cannot be read or a file name with control characters)',
   401: 'Not signed in',
   403: 'Role may not do this, or the CSRF token is missing or wrong (code `csrf`)',
   404: 'Not found',
   409: 'Conflict with the current state (stale version or duplicate)',
   413: 'Too large',
   415: 'Unsupported media type',
-  422: 'Understood but cannot be done',
+  422: 'Understood but cannot be done; code `invalid_characters` when text holds control or text-direction characters (`fields` names them)',
   429: 'Too many attempts; see Retry-After',
 };
 
@@ -42,6 +42,7 @@ export function buildOpenApiDocument(routes: RouteSpec[], version: string) {
     };
     const errorStatuses = new Set<number>(spec.errors ?? []);
     if (spec.params || spec.query || spec.body) errorStatuses.add(400);
+    if (spec.query || spec.body) errorStatuses.add(422);
     if (spec.access.kind !== 'public') errorStatuses.add(401);
     if (spec.access.kind === 'permission' || spec.method !== 'get') errorStatuses.add(403);
     for (const code of [...errorStatuses].sort()) {

@@ -1,9 +1,11 @@
 import type { z } from 'zod';
+import { isInvalidCharactersIssue } from '../../shared/schemas/text.js';
 
-/** Flattens zod issues into `{ "path.to.field": "first message" }`. */
+/** Flattens zod issues into `{ "path.to.field": "first message" }`; a refused character is told first. */
 export function fieldsFromZodError(error: z.ZodError, prefix = ''): Record<string, string> {
   const fields: Record<string, string> = {};
-  for (const issue of error.issues) {
+  const issues = [...error.issues.filter(isInvalidCharactersIssue), ...error.issues.filter((i) => !isInvalidCharactersIssue(i))];
+  for (const issue of issues) {
     const key = [prefix, ...issue.path.map(String)].filter(Boolean).join('.') || prefix || '_';
     fields[key] ??= issue.message;
   }

@@ -3,6 +3,7 @@ import Papa from 'papaparse';
 import { checkObjectNumber } from '../../shared/calc/object-number.js';
 import { ARTIFACT_CSV_COLUMNS, IMPORT_MAX_ROWS, type ImportMode, type ImportResult, type ImportRow } from '../../shared/schemas/artifact-import.js';
 import { ARTIFACT_CATEGORIES, CATEGORY_LABELS, type ArtifactFilters, createArtifactBody } from '../../shared/schemas/artifacts.js';
+import { characterProblem, withoutInvalidCharacters, type TextKind } from '../../shared/schemas/text.js';
 import type { CompartmentEntity } from '../db/entities/compartment.entity.js';
 import type { Repositories, Store } from '../db/store.js';
 import { ApiError, NotFoundError, UnprocessableError, ValidationError } from '../http/errors.js';
@@ -33,6 +34,10 @@ const FIELD_COLUMNS: Record<string, string> = {
 };
 
 const KNOWN = new Set<string>(ARTIFACT_CSV_COLUMNS.map((c) => c.name));
+/** Columns read on import, with the kind of text each holds (the deck column is ignored). */
+const READ_COLUMNS = ARTIFACT_CSV_COLUMNS.map((c) => c.name).filter((c) => c !== 'deck');
+const FREE_COLUMNS = new Set<string>(['description', 'significance']);
+const kindOf = (column: string): TextKind => (FREE_COLUMNS.has(column) ? 'free' : 'line');
 const REQUIRED = ARTIFACT_CSV_COLUMNS.filter((c) => c.required).map((c) => c.name);
 
 function categoryOf(value: string): string {
@@ -86,14 +91,26 @@ export class ArtifactImportService {
     for (const [i, record] of records.entries()) {
       const line = i + 2;
       const errors: ImportRow['errors'] = [];
+      // A cell with a control or text-direction character is refused with that reason alone.
+      const refused = new Set<string>();
+      for (const column of READ_COLUMNS) {
+        const problem = characterProblem(record[column] ?? '', kindOf(column), 'This cell');
+        if (problem) {
+          refused.add(column);
+          errors.push({ column, message: problem });
+        }
+      }
       const number = checkObjectNumber(record.object_number ?? '', settings.objectNumberPattern);
-      if (!number.ok) errors.push({ column: 'object_number', message: number.message });
-      else if (taken.has(number.value)) errors.push({ column: 'object_number', message: `${number.value} is already in the collection.` });
-      else if (seen.has(number.value)) errors.push({ column: 'object_number', message: `${number.value} is also on line ${seen.get(number.value)}.` });
-      if (number.ok && !seen.has(number.value)) seen.set(number.value, line);
+      const numberOk = number.ok && !refused.has('object_number');
+      if (!refused.has('object_number')) {
+        if (!number.ok) errors.push({ column: 'object_number', message: number.message });
+        else if (taken.has(number.value)) errors.push({ column: 'object_number', message: `${number.value} is already in the collection.` });
+        else if (seen.has(number.value)) errors.push({ column: 'object_number', message: `${number.value} is also on line ${seen.get(number.value)}.` });
+      }
+      if (number.ok && numberOk && !seen.has(number.value)) seen.set(number.value, line);
       const designation = (record.compartment ?? '').trim();
       const compartment = designation ? compartments.get(designationKey(designation)) ?? null : null;
-      if (designation && !compartment) errors.push({ column: 'compartment', message: `No compartment ${designation} on this vessel.` });
+      if (designation && !compartment && !refused.has('compartment')) errors.push({ column: 'compartment', message: `No compartment ${designation} on this vessel.` });
       const parsed = createArtifactBody.safeParse({
         objectNumber: record.object_number ?? '',
         name: record.name ?? '',
@@ -114,16 +131,16 @@ export class ArtifactImportService {
       if (!parsed.success) {
         for (const issue of parsed.error.issues) {
           const column = FIELD_COLUMNS[String(issue.path[0])] ?? String(issue.path[0]);
-          if (column === 'object_number' && errors.some((e) => e.column === column)) continue;
+          if (refused.has(column) || (column === 'object_number' && errors.some((e) => e.column === column))) continue;
           errors.push({ column, message: issue.message });
         }
       } else if (!designation || compartment) {
         await checkPlace(repos, vesselId, parsed.data.compartmentId, null, parsed.data.status).catch((err: Error) => errors.push({ column: 'compartment', message: err.message }));
       }
       checked.push({
-        row: { line, objectNumber: (record.object_number ?? '').trim(), name: (record.name ?? '').trim(), errors },
+        row: { line, objectNumber: withoutInvalidCharacters(record.object_number ?? '').trim(), name: withoutInvalidCharacters(record.name ?? '').trim(), errors },
         input: parsed.success && errors.length === 0 ? parsed.data : null,
-        objectNumber: number.ok ? number.value : '',
+        objectNumber: number.ok && numberOk ? number.value : '',
         compartment,
       });
     }
@@ -175,22 +192,24 @@ export class ArtifactImportService {
     // escapeFormulae: a cell starting with = + - @ is prefixed with ' so spreadsheets do not run it.
     write(Papa.unparse([columns], { newline: '\r\n' }) + '\r\n');
     for await (const batch of this.store.repos.artifacts.all(vesselId, filters)) {
+      // Text stored before the character rule may still hold what the rule refuses: never written out.
+      const clean = (value: string, kind: TextKind = 'line') => withoutInvalidCharacters(value, kind);
       const rows = batch.map((a) => [
-        a.objectNumber,
-        a.name,
+        clean(a.objectNumber),
+        clean(a.name),
         a.category,
-        a.description,
-        a.dateOrPeriod,
-        a.maker,
-        a.materials,
+        clean(a.description, 'free'),
+        clean(a.dateOrPeriod),
+        clean(a.maker),
+        clean(a.materials),
         a.height ?? '',
         a.width ?? '',
         a.depth ?? '',
         a.dimensionUnit,
-        a.significance,
+        clean(a.significance, 'free'),
         a.status,
-        a.compartment?.designation ?? '',
-        a.compartment?.deck?.name ?? '',
+        clean(a.compartment?.designation ?? ''),
+        clean(a.compartment?.deck?.name ?? ''),
       ]);
       write(Papa.unparse(rows, { escapeFormulae: true, newline: '\r\n' }) + '\r\n');
     }

@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { listQuery, pageOf, text } from './common.js';
+import { listQuery, pageOf } from './common.js';
+import { freeText, line, refuseInvalidCharacters, text } from './text.js';
 
 export const ARTIFACT_CATEGORIES = [
   'propulsion',
@@ -104,7 +105,7 @@ export type ArtifactListItem = z.infer<typeof artifactListItem>;
 export const ARTIFACT_SORTS = ['objectNumber', 'name', 'category', 'status', 'updatedAt', 'relevance'] as const;
 
 export const artifactFilters = z.object({
-  q: z.string().trim().max(200, 'Search at most 200 characters.').optional(),
+  q: refuseInvalidCharacters(z.string(), 'Search').trim().max(200, 'Search at most 200 characters.').optional(),
   category: z.enum(ARTIFACT_CATEGORIES).optional(),
   status: z.enum(ARTIFACT_STATUSES).optional(),
   deckId: z.coerce.number().int().positive().optional(),
@@ -139,7 +140,6 @@ export const artifactMarker = z
 export type ArtifactMarker = z.infer<typeof artifactMarker>;
 export const artifactMarkers = z.array(artifactMarker);
 
-const optionalText = (max: number, label: string) => z.string().trim().max(max, `${label} must be at most ${max} characters.`);
 const measure = (label: string) =>
   z
     .number({ error: `${label} must be a number.` })
@@ -148,18 +148,18 @@ const measure = (label: string) =>
     .nullable();
 
 const describingFields = {
-  objectNumber: z.string({ error: 'Object number is required.' }).trim().min(1, 'Object number is required.').max(40, 'Object number must be at most 40 characters.'),
+  objectNumber: refuseInvalidCharacters(z.string({ error: 'Object number is required.' }), 'Object number').trim().min(1, 'Object number is required.').max(40, 'Object number must be at most 40 characters.'),
   name: text(160, 'Name'),
   category: z.enum(ARTIFACT_CATEGORIES, { error: 'Choose a category.' }),
-  description: optionalText(8000, 'Description'),
-  dateOrPeriod: optionalText(80, 'Date or period'),
-  maker: optionalText(200, 'Maker'),
-  materials: optionalText(400, 'Materials'),
+  description: freeText(8000, 'Description'),
+  dateOrPeriod: line(80, 'Date or period'),
+  maker: line(200, 'Maker'),
+  materials: line(400, 'Materials'),
   height: measure('Height'),
   width: measure('Width'),
   depth: measure('Depth'),
   dimensionUnit: z.enum(DIMENSION_UNITS, { error: 'Choose mm, cm, m, in or ft.' }),
-  significance: optionalText(8000, 'Significance'),
+  significance: freeText(8000, 'Significance'),
 };
 
 const placeFields = {
@@ -200,7 +200,7 @@ export const moveArtifactBody = z
   .object({
     ...placeFields,
     status: z.enum(MOVABLE_STATUSES, { error: 'Choose in place, in store, on loan or missing.' }),
-    reason: text(500, 'Reason'),
+    reason: text(500, 'Reason', 'free'),
     movedOn: isoDate.optional(),
     version: z.number().int().min(1),
   })
@@ -208,7 +208,7 @@ export const moveArtifactBody = z
 export type MoveArtifactBody = z.input<typeof moveArtifactBody>;
 
 export const archiveArtifactBody = z
-  .object({ reason: text(1000, 'Reason'), movedOn: isoDate.optional(), version: z.number().int().min(1) })
+  .object({ reason: text(1000, 'Reason', 'free'), movedOn: isoDate.optional(), version: z.number().int().min(1) })
   .meta({ id: 'ArchiveArtifactBody' });
 export type ArchiveArtifactBody = z.input<typeof archiveArtifactBody>;
 

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { listQuery, pageOf } from './common.js';
+import { line } from './text.js';
 
 export const AUDIT_ACTIONS = ['create', 'update', 'delete', 'archive', 'move', 'import', 'upload', 'submit', 'amend', 'restore', 'deactivate', 'reactivate', 'invite', 'resend', 'revoke', 'accept', 'sign-in', 'sign-in-failed', 'sign-out', 'password-reset-request', 'password-reset', 'password-change'] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];
@@ -23,7 +24,7 @@ export type AuditEvent = z.infer<typeof auditEvent>;
 
 export const auditEventsQuery = listQuery(['at'], '-at').extend({
   actorId: z.coerce.number().int().positive().optional(),
-  entityType: z.string().trim().max(60).optional(),
+  entityType: line(60, 'Record type').optional(),
   action: z.enum(AUDIT_ACTIONS).optional(),
   from: z.iso.date('Use a date as YYYY-MM-DD.').optional(),
   to: z.iso.date('Use a date as YYYY-MM-DD.').optional(),

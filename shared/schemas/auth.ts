@@ -2,9 +2,10 @@ import { z } from 'zod';
 import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH, passwordLength } from '../password-policy.js';
 import { ROLES } from '../roles.js';
 import { email } from './common.js';
+import { refuseInvalidCharacters } from './text.js';
 
-export const newPassword = z
-  .string()
+/** Sign-in fields take any password that exists; a new one follows the character rule of text. */
+export const newPassword = refuseInvalidCharacters(z.string(), 'Password')
   .refine((p) => passwordLength(p) >= PASSWORD_MIN_LENGTH, `Use at least ${PASSWORD_MIN_LENGTH} characters. A few unrelated words make a long password easy to remember.`)
   .refine((p) => passwordLength(p) <= PASSWORD_MAX_LENGTH, `Use at most ${PASSWORD_MAX_LENGTH} characters.`);
 
@@ -19,11 +20,14 @@ export type LoginBody = z.infer<typeof loginBody>;
 export const passwordResetRequestBody = z.object({ email }).meta({ id: 'PasswordResetRequestBody' });
 export type PasswordResetRequestBody = z.infer<typeof passwordResetRequestBody>;
 
-export const tokenBody = z.object({ token: z.string().min(20).max(200) }).meta({ id: 'TokenBody' });
+/** A token from a link; the same character rule as text, so nothing hidden reaches a lookup or a log. */
+export const linkToken = refuseInvalidCharacters(z.string(), 'Token').min(20).max(200);
+
+export const tokenBody = z.object({ token: linkToken }).meta({ id: 'TokenBody' });
 export type TokenBody = z.infer<typeof tokenBody>;
 
 export const passwordResetCompleteBody = z
-  .object({ token: z.string().min(20).max(200), password: newPassword })
+  .object({ token: linkToken, password: newPassword })
   .meta({ id: 'PasswordResetCompleteBody' });
 export type PasswordResetCompleteBody = z.infer<typeof passwordResetCompleteBody>;
 

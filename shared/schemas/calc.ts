@@ -1,7 +1,8 @@
 import { z } from 'zod';
+import { refuseInvalidCharacters } from './text.js';
 
 export const designationQuery = z.object({
-  value: z.string({ error: 'Give a designation, e.g. 3-110-2-E.' }).trim().min(1, 'Give a designation, e.g. 3-110-2-E.').max(40, 'A designation is at most 40 characters.'),
+  value: refuseInvalidCharacters(z.string({ error: 'Give a designation, e.g. 3-110-2-E.' }), 'Designation').trim().min(1, 'Give a designation, e.g. 3-110-2-E.').max(40, 'A designation is at most 40 characters.'),
   scheme: z.enum(['us-navy-1949'], { error: 'The only scheme that can be parsed is us-navy-1949.' }).default('us-navy-1949'),
 });
 export type DesignationQuery = z.infer<typeof designationQuery>;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { refuseInvalidCharacters } from './text.js';
 
 export const idParam = z.object({ id: z.coerce.number().int().positive() });
 export type IdParam = z.infer<typeof idParam>;
@@ -42,6 +43,8 @@ export const ERROR_CODES = [
   'payload_too_large',
   'unsupported_media_type',
   'unprocessable',
+  'invalid_characters',
+  'malformed_upload',
   'rate_limited',
   'internal',
 ] as const;
@@ -59,17 +62,7 @@ export const errorEnvelope = z
   .meta({ id: 'Error' });
 export type ErrorEnvelope = z.infer<typeof errorEnvelope>;
 
-/** A trimmed, non-empty line of text. */
-export function text(max: number, label = 'This field') {
-  return z
-    .string()
-    .trim()
-    .min(1, `${label} is required.`)
-    .max(max, `${label} must be at most ${max} characters.`);
-}
-
-export const email = z
-  .string()
+export const email = refuseInvalidCharacters(z.string(), 'E-mail address')
   .trim()
   .toLowerCase()
   .max(254, 'E-mail address must be at most 254 characters.')

@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { listQuery, pageOf, text } from './common.js';
+import { listQuery, pageOf } from './common.js';
+import { freeText, line, text } from './text.js';
 import { HAZARD_KINDS } from './hazards.js';
 
 export const ACCESS_STATUSES = ['open', 'guided-only', 'staff-only', 'sealed'] as const;
@@ -44,7 +45,7 @@ export const compartmentsQuery = listQuery(['designation', 'name', 'accessStatus
   deckId: z.coerce.number().int().positive().optional(),
   accessStatus: z.enum(ACCESS_STATUSES).optional(),
   hazard: z.enum(HAZARD_KINDS).optional(),
-  q: z.string().trim().max(100).optional(),
+  q: line(100, 'Search').optional(),
 });
 export type CompartmentsQuery = z.infer<typeof compartmentsQuery>;
 
@@ -54,7 +55,7 @@ const compartmentFields = {
   deckId: z.number({ error: 'Choose a deck.' }).int().positive(),
   designation: text(40, 'Designation'),
   name: text(120, 'Name'),
-  description: z.string().trim().max(4000, 'Description must be at most 4000 characters.'),
+  description: freeText(4000, 'Description'),
   accessStatus: z.enum(ACCESS_STATUSES, { error: 'Choose who may enter: open, guided only, staff only or sealed.' }),
   virtualVisit: z.boolean(),
   outline: z.array(point, { error: 'An outline is a list of [x, y] corners.' }).max(500, 'An outline has at most 500 corners.').nullable(),

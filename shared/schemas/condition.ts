@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { GRADES, SEVERITIES } from '../calc/condition-grade.js';
 import { RUST_DISTRIBUTIONS } from '../calc/rust-grade.js';
 import { listQuery, pageOf } from './common.js';
+import { freeText, line } from './text.js';
 import { INCIDENT_KINDS } from './incidents.js';
 
 /** The Canadian Conservation Institute's ten agents of deterioration. */
@@ -125,8 +126,8 @@ const findingFields = {
   severity: z.enum(SEVERITIES, { error: 'Choose slight, moderate, severe or critical.' }),
   percentRusted: percent('Percent rusted').nullable(),
   rustDistribution: z.enum(RUST_DISTRIBUTIONS, { error: 'Distribution is S, G, P or H.' }).nullable(),
-  description: z.string().trim().max(4000, 'Description must be at most 4000 characters.'),
-  recommendedAction: z.string().trim().max(2000, 'Recommended action must be at most 2000 characters.'),
+  description: freeText(4000, 'Description'),
+  recommendedAction: freeText(2000, 'Recommended action'),
   urgency: z.enum(URGENCIES, { error: 'Choose how urgent the action is.' }),
 };
 
@@ -200,7 +201,7 @@ export const conditionReportsQuery = listQuery(['inspectedOn', 'updatedAt', 'gra
   subjectId: z.coerce.number().int().positive().optional(),
   status: z.enum(REPORT_STATUSES).optional(),
   grade: z.enum(GRADES).optional(),
-  q: z.string().trim().max(200).optional(),
+  q: line(200, 'Search').optional(),
 });
 export type ConditionReportsQuery = z.infer<typeof conditionReportsQuery>;
 export const conditionReportPage = pageOf(conditionReportSummary).meta({ id: 'ConditionReportPage' });
@@ -211,9 +212,9 @@ const reportFields = {
   method: z.enum(METHODS, { error: 'Choose how the survey was made.' }),
   temperatureC: z.number({ error: 'Temperature must be a number.' }).min(-50, 'Temperature must be between −50 and 60 °C.').max(60, 'Temperature must be between −50 and 60 °C.').nullable(),
   relativeHumidity: percent('Relative humidity').nullable(),
-  summary: z.string().trim().max(8000, 'Summary must be at most 8000 characters.'),
+  summary: freeText(8000, 'Summary'),
   gradeOverride: z.enum(GRADES).nullable(),
-  overrideReason: z.string().trim().max(1000, 'Reason must be at most 1000 characters.').nullable(),
+  overrideReason: freeText(1000, 'Reason').nullable(),
 };
 
 export const createConditionReportBody = z

@@ -1,9 +1,8 @@
 import { z } from 'zod';
-import { text } from './common.js';
+import { refuseInvalidCharacters, text } from './text.js';
 
 const point = z.tuple([z.number(), z.number()]);
-const levelCode = z
-  .string()
+const levelCode = refuseInvalidCharacters(z.string(), 'Deck number')
   .trim()
   .regex(/^(0[1-9]|[1-9])\d?$/, 'Write the deck as designations do: 1 for the main deck, 2, 3, … below it, 01, 02, … above it.')
   .nullable();

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { freeText } from './text.js';
 
 export const HAZARD_KINDS = ['asbestos', 'lead-paint', 'confined-space', 'low-headroom', 'steep-ladder', 'trip-hazard', 'electrical', 'other'] as const;
 export type HazardKind = (typeof HAZARD_KINDS)[number];
@@ -38,7 +39,7 @@ const today = () => new Date().toISOString().slice(0, 10);
 
 const hazardFields = {
   kind: z.enum(HAZARD_KINDS, { error: 'Choose the kind of hazard.' }),
-  notes: z.string().trim().max(4000, 'Notes must be at most 4000 characters.'),
+  notes: freeText(4000, 'Notes'),
   lastVerifiedOn: z.iso
     .date('Use a date as YYYY-MM-DD.')
     .refine((d) => d <= today(), 'The date of the last check cannot be in the future.')

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { SEVERITIES } from '../calc/condition-grade.js';
-import { listQuery, pageOf, text } from './common.js';
+import { listQuery, pageOf } from './common.js';
+import { freeText, line, text } from './text.js';
 
 export const INCIDENT_KINDS = ['vandalism', 'theft', 'water-ingress', 'fire', 'accident', 'other'] as const;
 export type IncidentKind = (typeof INCIDENT_KINDS)[number];
@@ -57,10 +58,10 @@ export const createIncidentBody = z
     title: text(200, 'Title'),
     foundOn: isoDate,
     occurredOn: isoDate.nullable().default(null),
-    description: z.string().trim().max(8000, 'Description must be at most 8000 characters.').default(''),
-    reportedTo: z.string().trim().max(300, 'Reported to must be at most 300 characters.').default(''),
-    policeReference: z.string().trim().max(100, 'Police reference must be at most 100 characters.').default(''),
-    actionsTaken: z.string().trim().max(4000, 'Actions taken must be at most 4000 characters.').default(''),
+    description: freeText(8000, 'Description').default(''),
+    reportedTo: line(300, 'Reported to').default(''),
+    policeReference: line(100, 'Police reference').default(''),
+    actionsTaken: freeText(4000, 'Actions taken').default(''),
     artifactIds: ids('Artifacts').default([]),
     compartmentIds: ids('Compartments').default([]),
     /** Affected compartments to close to visitors now (their access becomes staff only). */
@@ -75,10 +76,10 @@ export const updateIncidentBody = z
   .object({
     title: text(200, 'Title'),
     occurredOn: isoDate.nullable(),
-    description: z.string().trim().max(8000),
-    reportedTo: z.string().trim().max(300),
-    policeReference: z.string().trim().max(100),
-    actionsTaken: z.string().trim().max(4000),
+    description: freeText(8000, 'Description'),
+    reportedTo: line(300, 'Reported to'),
+    policeReference: line(100, 'Police reference'),
+    actionsTaken: freeText(4000, 'Actions taken'),
     version: z.number().int().min(1),
   })
   .partial()

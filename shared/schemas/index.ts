@@ -19,3 +19,4 @@ export * from './artifact-import.js';
 export * from './condition.js';
 export * from './incidents.js';
 export * from './risks.js';
+export * from './text.js';

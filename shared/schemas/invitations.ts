@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { ROLES } from '../roles.js';
-import { newPassword } from './auth.js';
-import { email, listQuery, pageOf, text } from './common.js';
+import { linkToken, newPassword } from './auth.js';
+import { email, listQuery, pageOf } from './common.js';
+import { text } from './text.js';
 
 export const INVITATION_STATUSES = ['pending', 'accepted', 'expired', 'revoked'] as const;
 export type InvitationStatus = (typeof INVITATION_STATUSES)[number];
@@ -53,7 +54,7 @@ export type InspectInvitationResponse = z.infer<typeof inspectInvitationResponse
 
 export const acceptInvitationBody = z
   .object({
-    token: z.string().min(20).max(200),
+    token: linkToken,
     name: text(120, 'Name'),
     password: newPassword,
   })

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { freeText, line } from './text.js';
 
 export const MEDIA_OWNER_TYPES = ['artifact', 'compartment', 'condition-report', 'incident'] as const;
 export type MediaOwnerType = (typeof MEDIA_OWNER_TYPES)[number];
@@ -52,14 +53,12 @@ export const mediaOwnerQuery = z.object({
 });
 export type MediaOwnerQuery = z.infer<typeof mediaOwnerQuery>;
 
-const line = (max: number, label: string) => z.string().trim().max(max, `${label} must be at most ${max} characters.`);
-
 export const updateMediaBody = z
   .object({
-    caption: line(500, 'Caption'),
+    caption: freeText(500, 'Caption'),
     credit: line(200, 'Credit'),
-    altText: line(300, 'Alt text'),
-    rights: line(500, 'Rights note'),
+    altText: freeText(300, 'Alt text'),
+    rights: freeText(500, 'Rights note'),
     version: z.number().int().min(1),
   })
   .partial()

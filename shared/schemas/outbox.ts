@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { listQuery, pageOf } from './common.js';
+import { line } from './text.js';
 
 export const outboxMessageSummary = z
   .object({
@@ -18,7 +19,7 @@ export const outboxMessage = outboxMessageSummary
 export type OutboxMessage = z.infer<typeof outboxMessage>;
 
 export const outboxQuery = listQuery(['receivedAt'], '-receivedAt').extend({
-  to: z.string().trim().max(254).optional(),
+  to: line(254, 'Recipient').optional(),
 });
 export type OutboxQuery = z.infer<typeof outboxQuery>;
 

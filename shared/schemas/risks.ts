@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { PRIORITY_BANDS } from '../calc/abc-risk.js';
-import { listQuery, pageOf, text } from './common.js';
+import { listQuery, pageOf } from './common.js';
+import { freeText, text } from './text.js';
 import { AGENTS } from './condition.js';
 
 export const RISK_STATUSES = ['open', 'treated'] as const;
@@ -48,7 +49,7 @@ const ids = z.array(z.number().int().positive()).max(100, 'At most 100.');
 
 /** Each score is given directly (1–5 in half steps) or from its plain input; the server converts and checks. */
 const riskFields = {
-  statement: text(300, 'Risk'),
+  statement: text(300, 'Risk', 'free'),
   agent: z.enum(AGENTS, { error: 'Choose the agent of deterioration.' }),
   status: z.enum(RISK_STATUSES),
   a: positive('A').nullable(),
@@ -59,7 +60,7 @@ const riskFields = {
   assetFractionPercent: positive('Share of the heritage value').nullable(),
   artifactIds: ids,
   compartmentIds: ids,
-  notes: z.string().trim().max(4000, 'Notes must be at most 4000 characters.'),
+  notes: freeText(4000, 'Notes'),
 };
 
 export const createRiskBody = z

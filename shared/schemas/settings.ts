@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { PATTERN_PROBLEM_MESSAGES, patternProblem } from '../calc/object-number.js';
-import { text } from './common.js';
+import { refuseInvalidCharacters, text } from './text.js';
 
 export const UNIT_SYSTEMS = ['us-customary', 'metric'] as const;
 export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
@@ -22,12 +22,11 @@ export type OrganisationSettings = z.infer<typeof organisationSettings>;
 export const updateSettingsBody = z
   .object({
     organisationName: text(160, 'Organisation name'),
-    country: z.string().trim().toUpperCase().regex(/^[A-Z]{2}$/, 'Use the two-letter country code of ISO 3166-1 (e.g. US, GB).'),
-    currency: z.string().trim().toUpperCase().regex(/^[A-Z]{3}$/, 'Use the three-letter currency code of ISO 4217 (e.g. USD).'),
+    country: refuseInvalidCharacters(z.string(), 'Country').trim().toUpperCase().regex(/^[A-Z]{2}$/, 'Use the two-letter country code of ISO 3166-1 (e.g. US, GB).'),
+    currency: refuseInvalidCharacters(z.string(), 'Currency').trim().toUpperCase().regex(/^[A-Z]{3}$/, 'Use the three-letter currency code of ISO 4217 (e.g. USD).'),
     unitSystem: z.enum(UNIT_SYSTEMS, { error: 'Choose US customary or metric units.' }),
-    contactEmail: z.union([z.literal(''), z.email('Enter a valid e-mail address.')]),
-    objectNumberPattern: z
-      .string()
+    contactEmail: refuseInvalidCharacters(z.string(), 'Contact e-mail').pipe(z.union([z.literal(''), z.email('Enter a valid e-mail address.')])),
+    objectNumberPattern: refuseInvalidCharacters(z.string(), 'Pattern')
       .trim()
       .max(40, 'A pattern has at most 40 characters.')
       .superRefine((value, ctx) => {

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { ROLES } from '../roles.js';
-import { listQuery, pageOf, text } from './common.js';
+import { listQuery, pageOf } from './common.js';
+import { line, text } from './text.js';
 
 export const USER_STATUSES = ['active', 'deactivated'] as const;
 export type UserStatus = (typeof USER_STATUSES)[number];
@@ -24,7 +25,7 @@ export type User = z.infer<typeof user>;
 export const usersQuery = listQuery(['name', 'email', 'role', 'createdAt', 'lastSignInAt'], 'name').extend({
   role: z.enum(ROLES).optional(),
   status: z.enum(USER_STATUSES).optional(),
-  q: z.string().trim().max(100).optional(),
+  q: line(100, 'Search').optional(),
 });
 export type UsersQuery = z.infer<typeof usersQuery>;
 
@@ -40,6 +41,6 @@ export const updateUserBody = z
 export type UpdateUserBody = z.infer<typeof updateUserBody>;
 
 export const deactivateUserBody = z
-  .object({ reason: text(500, 'Reason').optional() })
+  .object({ reason: text(500, 'Reason', 'free').optional() })
   .meta({ id: 'DeactivateUserBody' });
 export type DeactivateUserBody = z.infer<typeof deactivateUserBody>;

@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { listQuery, pageOf, text } from './common.js';
+import { listQuery, pageOf } from './common.js';
+import { freeText, line, text } from './text.js';
 
 export const DESIGNATION_SCHEMES = ['free-text', 'us-navy-1949'] as const;
 export type DesignationScheme = (typeof DESIGNATION_SCHEMES)[number];
@@ -20,8 +21,8 @@ const vesselFields = {
     .min(1700, 'Year built must be 1700 or later.')
     .max(currentYear, `Year built cannot be after ${currentYear}.`)
     .nullable(),
-  berth: z.string().trim().max(200, 'Berth must be at most 200 characters.'),
-  summary: z.string().trim().max(2000, 'Summary must be at most 2000 characters.'),
+  berth: line(200, 'Berth'),
+  summary: freeText(2000, 'Summary'),
   designationScheme: z.enum(DESIGNATION_SCHEMES, { error: 'Choose a designation scheme.' }),
 };
 
