@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { PRESSURE_READINGS, UNIT_CODES, type PressureReading } from '../calc/quantities.js';
 import { refuseInvalidCharacters } from './text.js';
 
 export const designationQuery = z.object({
@@ -68,3 +69,37 @@ export const abcRiskResponse = z
   })
   .meta({ id: 'AbcRisk' });
 export type AbcRiskResponse = z.infer<typeof abcRiskResponse>;
+
+const SATURATION_UNITS = [...PRESSURE_READINGS, 'C', 'F', 'K'] as const;
+
+export const saturationQuery = z.object({
+  pressure: number('pressure').optional(),
+  temperature: number('temperature').optional(),
+  unit: z.enum(SATURATION_UNITS, { error: `The unit is one of ${SATURATION_UNITS.join(', ')}.` }),
+  /** The local atmosphere in psia, for psig and inches of mercury vacuum (default: the standard atmosphere). */
+  atmosphere: number('atmosphere').optional(),
+});
+export type SaturationQuery = z.infer<typeof saturationQuery>;
+
+export const saturationResponse = z
+  .object({
+    temperatureC: z.number(),
+    temperatureF: z.number(),
+    temperatureK: z.number(),
+    pressurePa: z.number(),
+    pressure: z.object(Object.fromEntries(PRESSURE_READINGS.map((r) => [r, z.number()])) as Record<PressureReading, z.ZodNumber>),
+    atmospherePa: z.number(),
+    source: z.string(),
+  })
+  .meta({ id: 'Saturation' });
+export type SaturationResponse = z.infer<typeof saturationResponse>;
+
+export const convertQuery = z.object({
+  value: number('value'),
+  from: z.enum(UNIT_CODES, { error: `from is one of ${UNIT_CODES.join(', ')}.` }),
+  to: z.enum(UNIT_CODES, { error: `to is one of ${UNIT_CODES.join(', ')}.` }),
+});
+
+export const convertResponse = z
+  .object({ value: z.number(), from: z.string(), to: z.string(), result: z.number(), dimension: z.string(), source: z.string() })
+  .meta({ id: 'Conversion' });

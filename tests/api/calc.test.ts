@@ -75,3 +75,58 @@ describe('GET /api/v1/calc/abc-risk', () => {
     expect(zero.body.error.fields.yearsBetween).toBe('Years between events must be more than 0.');
   });
 });
+
+describe('GET /api/v1/calc/saturation', () => {
+  // IAPWS R7-97(2012), Table 36: 0.1 MPa → 372.755919 K
+  it('gives the boiling point at a pressure in every reading, with its source', async () => {
+    const res = await new Client(ctx.app).get('/api/v1/calc/saturation?pressure=100&unit=kPa');
+    expect(res.status).toBe(200);
+    expect(res.body.temperatureK).toBeCloseTo(372.755919, 5);
+    expect(res.body.temperatureC).toBeCloseTo(372.755919 - 273.15, 5);
+    expect(res.body.source).toMatch(/IAPWS-IF97/);
+    // US customary, computed with IF97 (REFERENCES.md, ±0.1 °F): 1 psia → 101.7 °F
+    const psia = await new Client(ctx.app).get('/api/v1/calc/saturation?pressure=1&unit=psia');
+    expect(Math.abs(psia.body.temperatureF - 101.7)).toBeLessThanOrEqual(0.1);
+    // 0 psig at the standard atmosphere (101 325 Pa, NIST SP 811) is 14.696 psia → 212.0 °F
+    const gauge = await new Client(ctx.app).get('/api/v1/calc/saturation?pressure=0&unit=psig');
+    expect(Math.abs(gauge.body.temperatureF - 212)).toBeLessThanOrEqual(0.1);
+    expect(gauge.body.pressure.psia).toBeCloseTo(14.6959488, 6);
+    // the local atmosphere moves a gauge reading: 0 psig at 14 psia is 14 psia absolute
+    const local = await new Client(ctx.app).get('/api/v1/calc/saturation?pressure=0&unit=psig&atmosphere=14');
+    expect(local.body.pressure.psia).toBeCloseTo(14, 9);
+    expect(local.body.temperatureF).toBeLessThan(gauge.body.temperatureF);
+  });
+
+  // IAPWS R7-97(2012), Table 35: 500 K → 2.63889776 MPa
+  it('gives the saturation pressure at a temperature', async () => {
+    const res = await new Client(ctx.app).get(`/api/v1/calc/saturation?temperature=${500 - 273.15}&unit=C`);
+    expect(res.status).toBe(200);
+    expect(res.body.pressure.MPa).toBeCloseTo(2.63889776, 6);
+    expect(res.body.temperatureK).toBeCloseTo(500, 9);
+  });
+
+  it('answers 422 naming the range off the saturation line, and 400 for a bad unit', async () => {
+    const high = await new Client(ctx.app).get('/api/v1/calc/saturation?pressure=30&unit=MPa');
+    expect(high.status).toBe(422);
+    expect(high.body.error.fields.pressure).toMatch(/611.213 Pa and 22.064 MPa/);
+    const vacuum = await new Client(ctx.app).get('/api/v1/calc/saturation?pressure=31&unit=inHgVac');
+    expect(vacuum.status).toBe(422);
+    const cold = await new Client(ctx.app).get('/api/v1/calc/saturation?temperature=-5&unit=C');
+    expect(cold.status).toBe(422);
+    expect(cold.body.error.fields.temperature).toMatch(/273.15 K and 647.096 K/);
+    expect((await new Client(ctx.app).get('/api/v1/calc/saturation?unit=psia')).status).toBe(422);
+    expect((await new Client(ctx.app).get('/api/v1/calc/saturation?pressure=1&unit=atm')).status).toBe(400);
+  });
+});
+
+describe('GET /api/v1/calc/convert', () => {
+  // 1 US gallon = 231 in³ = 3.785411784 L, exact (NIST SP 811, B.8)
+  it('converts within a kind and refuses across kinds', async () => {
+    const res = await new Client(ctx.app).get('/api/v1/calc/convert?value=1000&from=gal/d&to=L/d');
+    expect(res.status).toBe(200);
+    expect(res.body).toMatchObject({ result: expect.closeTo(3785.411784, 9), dimension: 'volume flow', source: expect.stringMatching(/NIST SP 811/) });
+    const bad = await new Client(ctx.app).get('/api/v1/calc/convert?value=1&from=psi&to=kW');
+    expect(bad.status).toBe(422);
+    expect(bad.body.error.fields.to).toMatch(/do not convert/);
+  });
+});
