@@ -1,3 +1,5 @@
+import { HAZARD_CAUTIONS } from '../../shared/hazard-cautions.js';
+import { HAZARD_LABELS, type HazardKind } from '../../shared/schemas/hazards.js';
 import { gradeFromFindings } from '../../shared/calc/condition-grade.js';
 import { can } from '../../shared/permissions.js';
 import type { ConditionReport, ConditionReportSummary, Finding } from '../../shared/schemas/condition.js';
@@ -50,7 +52,7 @@ export function presentReportSummary(report: ConditionReportEntity, subjectLabel
   };
 }
 
-export function presentReport(report: ConditionReportEntity, subjectLabel: string, supersededById: number | null, findings: ConditionFindingEntity[], amendmentId: number | null, viewer: Express.User): ConditionReport {
+export function presentReport(report: ConditionReportEntity, subjectLabel: string, supersededById: number | null, findings: ConditionFindingEntity[], amendmentId: number | null, viewer: Express.User, hazardKinds: readonly HazardKind[] = []): ConditionReport {
   const draft = report.status === 'draft';
   const readFindings = can(viewer.role, 'conditionReport', 'readFindings');
   return {
@@ -62,6 +64,7 @@ export function presentReport(report: ConditionReportEntity, subjectLabel: strin
     gradeOverride: report.gradeOverride,
     overrideReason: readFindings ? report.overrideReason : null,
     findings: readFindings ? findings.map(presentFinding) : null,
+    subjectHazards: hazardKinds.map((kind) => ({ kind, label: HAZARD_LABELS[kind], caution: HAZARD_CAUTIONS[kind] })),
     version: report.version,
     abilities: {
       update: draft && can(viewer.role, 'conditionReport', 'update'),

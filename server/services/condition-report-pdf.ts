@@ -4,6 +4,8 @@ import sharp from 'sharp';
 import { GRADE_LABELS, RULE_TEXT, SEVERITY_LABELS, gradeFromFindings } from '../../shared/calc/condition-grade.js';
 import { RUST_DISTRIBUTION_LABELS, rustGradeRange, rustGrade } from '../../shared/calc/rust-grade.js';
 import { AGENT_LABELS, DAMAGE_TYPES, METHOD_LABELS, URGENCY_LABELS } from '../../shared/schemas/condition.js';
+import { HAZARD_CAUTIONS, workCautions } from '../../shared/hazard-cautions.js';
+import { HAZARD_LABELS, type HazardKind } from '../../shared/schemas/hazards.js';
 import type { ConditionFindingEntity } from '../db/entities/condition-finding.entity.js';
 import type { ConditionReportEntity } from '../db/entities/condition-report.entity.js';
 
@@ -22,6 +24,8 @@ export interface ReportPdfInput {
   supersededById: number | null;
   findings: ConditionFindingEntity[];
   photos: PdfPhoto[];
+  /** The hazards recorded where the subject is. */
+  hazards: readonly HazardKind[];
 }
 
 /** The standard PDF fonts know Windows-1252 only; anything else is written plainly. */
@@ -66,6 +70,13 @@ export async function conditionReportPdf(input: ReportPdfInput): Promise<Buffer>
   field('Environment at the time', environment || 'not recorded');
   field('Status', report.status === 'submitted' ? `Submitted and signed by ${report.signedBy} on ${report.submittedAt?.toISOString().slice(0, 16).replace('T', ' ')} UTC` : 'DRAFT: not signed, may still change');
 
+  if (input.hazards.length) {
+    heading('Hazards recorded here');
+    for (const kind of input.hazards) {
+      doc.font('Helvetica-Bold').fontSize(9.5).fillColor('#8a3b12').text(plain(`${HAZARD_LABELS[kind]}: `), { continued: true }).font('Helvetica').fillColor(INK).text(plain(HAZARD_CAUTIONS[kind]), { width });
+    }
+  }
+
   heading(`Overall condition: ${GRADE_LABELS[report.grade]}`);
   const rule = gradeFromFindings(findings);
   doc.font('Helvetica').fontSize(9.5).fillColor(INK).text(plain(`By the rule: ${GRADE_LABELS[rule.grade]} (${rule.because})`));
@@ -93,6 +104,7 @@ export async function conditionReportPdf(input: ReportPdfInput): Promise<Buffer>
     }
     if (f.description) field('Observed', f.description);
     field('Recommended action', f.recommendedAction || 'none given');
+    for (const caution of workCautions(input.hazards, f.damageType, f.recommendedAction ?? '')) field('Caution', caution.message);
     field('Urgency', URGENCY_LABELS[f.urgency]);
     doc.moveDown(0.5);
   });

@@ -24,6 +24,8 @@ const FINDING_FIELDS: (keyof ConditionFindingEntity)[] = ['artifactId', 'agent',
 interface Subject {
   vesselId: number;
   label: string;
+  /** Where the subject is: the compartment itself, or the artifact's compartment. */
+  compartmentId: number | null;
 }
 
 /** 422 for a percentage outside 0–100 (the schema only checks that it is a number). */
@@ -51,11 +53,11 @@ export class ConditionReportService {
     if (type === 'artifact') {
       const artifact = await repos.artifacts.findById(id);
       if (!artifact) throw new UnprocessableError('Choose an artifact of the collection.', { subjectId: 'No such artifact.' });
-      return { vesselId: artifact.vesselId, label: `${artifact.objectNumber} ${artifact.name}` };
+      return { vesselId: artifact.vesselId, label: `${artifact.objectNumber} ${artifact.name}`, compartmentId: artifact.compartmentId };
     }
     const compartment = await repos.compartments.findById(id);
     if (!compartment) throw new UnprocessableError('Choose a compartment of the ship.', { subjectId: 'No such compartment.' });
-    return { vesselId: compartment.vesselId, label: `${compartment.designation} ${compartment.name}` };
+    return { vesselId: compartment.vesselId, label: `${compartment.designation} ${compartment.name}`, compartmentId: compartment.id };
   }
 
   private async supersededBy(repos: Repositories, id: number): Promise<number | null> {
@@ -68,7 +70,8 @@ export class ConditionReportService {
     const report = await repos.conditionReports.findById(id);
     if (!report) throw new NotFoundError('The condition report');
     const [subject, findings, amendment] = [await this.subjectOf(repos, report.subjectType, report.subjectId), await repos.conditionReports.findings(id), await repos.conditionReports.amendmentOf(id)];
-    return presentReport(report, subject.label, amendment?.status === 'submitted' ? amendment.id : null, findings, amendment?.id ?? null, viewer);
+    const hazards = subject.compartmentId === null ? [] : ((await repos.hazards.kindsFor([subject.compartmentId])).get(subject.compartmentId) ?? []);
+    return presentReport(report, subject.label, amendment?.status === 'submitted' ? amendment.id : null, findings, amendment?.id ?? null, viewer, hazards);
   }
 
   /** Recomputes the grade and counts from the findings, saves the report and its search document. */
@@ -120,6 +123,7 @@ export class ConditionReportService {
       supersededById: await this.supersededBy(repos, id),
       findings,
       photos,
+      hazards: subject.compartmentId === null ? [] : ((await repos.hazards.kindsFor([subject.compartmentId])).get(subject.compartmentId) ?? []),
     });
     return { pdf, fileName: `condition-report-${id}-rev${report.revision}.pdf` };
   }

@@ -259,3 +259,31 @@ describe('what a condition record keeps in place', () => {
     expect((await curator.get(`/api/v1/condition-reports?vesselId=${vesselId}&q=tide`)).body.total).toBe(1);
   });
 });
+
+describe('hazards where the work is written', () => {
+  it('the report, an artifact’s report and the PDF carry the hazards of the space and caution work that would disturb them', async () => {
+    const { extractText, getDocumentProxy } = await import('unpdf');
+    await conservator.post(`/api/v1/compartments/${place.first}/hazards`, { kind: 'lead-paint', notes: 'Tested positive on the casings' });
+    await conservator.post(`/api/v1/compartments/${place.first}/hazards`, { kind: 'asbestos', notes: 'Lagging on the steam line' });
+    const room = await draft();
+    expect(room.subjectHazards.map((h: { kind: string }) => h.kind).sort()).toEqual(['asbestos', 'lead-paint']);
+    expect(room.subjectHazards.find((h: { kind: string }) => h.kind === 'lead-paint').caution).toMatch(/No dry sanding, scraping, wire-brushing/);
+    // an artifact's report takes the hazards of its compartment; a space without any has none
+    expect((await draft('artifact', gaugeId)).subjectHazards).toHaveLength(2);
+    expect((await draft('compartment', place.second)).subjectHazards).toEqual([]);
+
+    const last = await conservator.post(`/api/v1/condition-reports/${room.id}/findings`, { ...coating, recommendedAction: 'Wire-brush, prime and topcoat' });
+    const res = await curator.get(`/api/v1/condition-reports/${room.id}/pdf`).buffer(true).parse((r, done) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (c: Buffer) => chunks.push(c));
+      r.on('end', () => done(null, Buffer.concat(chunks)));
+    });
+    expect(last.status).toBe(201);
+    const { text } = await extractText(await getDocumentProxy(new Uint8Array(res.body as Buffer)), { mergePages: true });
+    const flat = text.replace(/\s+/g, ' ');
+    expect(flat).toContain('Hazards recorded here');
+    expect(flat).toContain('Lead-based paint: Lead-based paint is recorded here.');
+    expect(flat).toContain('Asbestos-containing material: Asbestos-containing material is recorded here.');
+    expect(flat).toContain('Caution: This action would disturb lead-based paint.');
+  });
+});
