@@ -27,10 +27,8 @@ export async function takeBackup(config: BackupConfig, now = new Date()): Promis
   await mkdir(config.backupDir, { recursive: true }).catch((err: Error) => {
     throw new Error(`The backup folder ${config.backupDir} cannot be written (${err.message}).`);
   });
-  const name = await freeName(config.backupDir, now);
-  const work = path.join(config.backupDir, `.${name}.partial`);
+  const { name, work } = await claimName(config.backupDir, now);
   const final = path.join(config.backupDir, name);
-  await mkdir(work);
   try {
     const dbFile = path.join(work, DATABASE_FILE);
     const snapshot = await snapshotDatabase(config.databasePath, dbFile);
@@ -73,6 +71,20 @@ export async function takeBackup(config: BackupConfig, now = new Date()): Promis
   } catch (err) {
     await rm(work, { recursive: true, force: true });
     throw err;
+  }
+}
+
+/** A free name and its work folder, created; another process may take the same name at the same moment. */
+async function claimName(dir: string, now: Date): Promise<{ name: string; work: string }> {
+  for (let attempt = 0; ; attempt++) {
+    const name = await freeName(dir, now);
+    const work = path.join(dir, `.${name}.partial`);
+    try {
+      await mkdir(work);
+      return { name, work };
+    } catch (err) {
+      if ((err as NodeJS.ErrnoException).code !== 'EEXIST' || attempt >= 5) throw err;
+    }
   }
 }
 

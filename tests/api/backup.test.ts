@@ -76,21 +76,26 @@ describe('backup and restore', () => {
     // Writes (artifacts, and documents on some of them) go on before, during and after the backup.
     let stop = false;
     let backingUp = false;
+    let writes = 0;
     let writesDuring = 0;
     const writer = (async () => {
       for (let i = 1; !stop; i++) {
         const artifact = await addArtifact(curator, vesselId, { objectNumber: `2021.7.${i}`, name: `Rivet ${i}`, compartmentId: place.second });
         if (i % 3 === 0) expect((await upload(curator, artifact.id, tinyPdf(), `rivet-${i}.pdf`)).status).toBe(201);
+        writes += 1;
         if (backingUp) writesDuring += 1;
       }
     })();
+    const writesReach = async (n: number) => {
+      while (writes < n) await new Promise((r) => setTimeout(r, 5));
+    };
     let done: Awaited<ReturnType<typeof takeBackup>>;
     try {
-      await new Promise((r) => setTimeout(r, 150));
+      await writesReach(3);
       backingUp = true;
       done = await takeBackup(ctx.config);
       backingUp = false;
-      await new Promise((r) => setTimeout(r, 100));
+      await writesReach(writes + 3);
     } finally {
       stop = true;
       await writer;
