@@ -1,4 +1,4 @@
-import { existsSync, readFileSync } from 'node:fs';
+import { existsSync } from 'node:fs';
 import path from 'node:path';
 import cookieParser from 'cookie-parser';
 import express, { type Express, type RequestHandler } from 'express';
@@ -18,6 +18,7 @@ import { ApiError } from './http/errors.js';
 import { buildOpenApiDocument } from './http/openapi.js';
 import { Mailer } from './mail/mailer.js';
 import { adminRoutes } from './routes/admin.routes.js';
+import { backupRoutes } from './routes/backups.routes.js';
 import { artifactImportRoutes } from './routes/artifact-import.routes.js';
 import { artifactRoutes } from './routes/artifacts.routes.js';
 import { mediaRoutes } from './routes/media.routes.js';
@@ -37,6 +38,7 @@ import { vesselRoutes } from './routes/vessels.routes.js';
 import { ArtifactImportService } from './services/artifact-import.service.js';
 import { ArtifactService } from './services/artifact.service.js';
 import { AuditService } from './services/audit.service.js';
+import { BackupService } from './services/backup.service.js';
 import { MediaService } from './services/media.service.js';
 import { AuthService } from './services/auth.service.js';
 import { CompartmentService } from './services/compartment.service.js';
@@ -55,6 +57,7 @@ import { PasswordService } from './services/password.service.js';
 import { SettingsService } from './services/settings.service.js';
 import { UserService } from './services/user.service.js';
 import { VesselService } from './services/vessel.service.js';
+import { appVersion as version } from './version.js';
 
 export interface AppDeps {
   config: Config;
@@ -67,13 +70,13 @@ export interface ShipkeeperApp {
   /** The API router and its declared routes (the authorization test enumerates both). */
   api: ApiRouter;
   plans: PlanService;
+  backups: BackupService;
   files: FileStore;
   routes: RouteSpec[];
   sessions: DatabaseSessionStore;
   close(): void;
 }
 
-const version = (JSON.parse(readFileSync(new URL('../package.json', import.meta.url), 'utf8')) as { version: string }).version;
 
 /** Ends a signed-in session that is older than the absolute timeout (OWASP ASVS 4.0.3, 3.3.2). */
 function absoluteTimeout(hours: number): RequestHandler {
@@ -122,6 +125,8 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
   mediaRoutes(api, new MediaService(store, files), { incomingDir: files.incoming, maxBytes: config.mediaMaxBytes });
   calcRoutes(api);
   adminRoutes(api, { audit: new AuditService(store), settings, outbox: new OutboxService(fakeMail) });
+  const backups = new BackupService(config);
+  backupRoutes(api, backups);
   let openApi: object | null = null;
   publicRoutes(api, {
     health: new HealthService(dataSource, fakeMail, version),
@@ -202,10 +207,12 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
     app,
     api,
     plans,
+    backups,
     files,
     routes: api.routes,
     sessions,
     close: () => {
+      backups.stop();
       sessions.close();
       mailer.close();
     },

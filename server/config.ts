@@ -42,6 +42,10 @@ export interface Config {
   planMaxSide: number;
   /** Largest photo or document accepted, in bytes. */
   mediaMaxBytes: number;
+  /** Where backups go, the hour of the daily one (server's local time, 0–23) and how many are kept. */
+  backupDir: string;
+  backupHour: number;
+  backupKeep: number;
 }
 
 function int(value: string | undefined, fallback: number, name: string): number {
@@ -49,6 +53,11 @@ function int(value: string | undefined, fallback: number, name: string): number 
   const n = Number(value);
   if (!Number.isInteger(n) || n < 0) throw new Error(`${name} must be a whole number, got "${value}".`);
   return n;
+}
+
+function between(value: number, min: number, max: number, name: string): number {
+  if (value < min || value > max) throw new Error(`${name} must be from ${min} to ${max}, got ${value}.`);
+  return value;
 }
 
 function bool(value: string | undefined, fallback: boolean): boolean {
@@ -108,6 +117,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
     planMaxBytes: int(env.PLAN_MAX_MB, 300, 'PLAN_MAX_MB') * 1024 * 1024,
     planMaxSide: int(env.PLAN_MAX_SIDE, 40_000, 'PLAN_MAX_SIDE'),
     mediaMaxBytes: int(env.MEDIA_MAX_MB, 50, 'MEDIA_MAX_MB') * 1024 * 1024,
+    backupDir: path.resolve(overrides.backupDir ?? env.BACKUP_DIR ?? path.join(dataDir, 'backups')),
+    backupHour: between(int(env.BACKUP_HOUR, 3, 'BACKUP_HOUR'), 0, 23, 'BACKUP_HOUR'),
+    backupKeep: between(int(env.BACKUP_KEEP, 14, 'BACKUP_KEEP'), 1, 10_000, 'BACKUP_KEEP'),
   };
   return { ...config, ...overrides };
 }

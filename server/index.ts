@@ -35,8 +35,10 @@ if (config.seedOnStart && (await seedDemo(dataSource, { bcryptCost: config.bcryp
 const shipkeeper = createApp({ config, dataSource, fakeMail });
 await shipkeeper.files.ensure();
 await shipkeeper.plans.recoverInterrupted();
+shipkeeper.backups.schedule();
 const server = shipkeeper.app.listen(config.port, config.host, () => {
   console.log(`Shipkeeper is running at ${config.publicUrl}`);
+  console.log(`Daily backup at ${String(config.backupHour).padStart(2, '0')}:00 server time into ${config.backupDir} (keeping ${config.backupKeep}).`);
 });
 
 async function shutdown() {

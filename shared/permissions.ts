@@ -18,6 +18,7 @@ export const PERMISSIONS = {
   auditEvent: { read: ADMIN },
   settings: { read: STAFF, update: ADMIN },
   outbox: { read: ADMIN },
+  backup: { read: ADMIN, create: ADMIN },
   deck: { read: STAFF, create: CURATOR, update: CURATOR, delete: CURATOR },
   compartment: { read: STAFF, create: CURATOR, update: CURATOR, delete: CURATOR },
   hazard: { read: STAFF, create: CONSERVATOR, update: CONSERVATOR, delete: CONSERVATOR },

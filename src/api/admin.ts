@@ -1,3 +1,4 @@
+import type { BackupStatus } from '@shared/schemas/backup';
 import type { AuditAction, AuditEvent } from '@shared/schemas/audit';
 import type { Page } from '@shared/schemas/common';
 import type { OutboxMessage, OutboxPage } from '@shared/schemas/outbox';
@@ -21,3 +22,5 @@ export const fetchSettings = () => api.get<OrganisationSettings>('/settings');
 export const updateSettings = (body: UpdateSettingsBody) => api.patch<OrganisationSettings>('/settings', body);
 export const listOutbox = (params: { page: number; pageSize: number; sort: string; to?: string }) => api.get<OutboxPage>('/outbox', { ...params });
 export const getOutboxMessage = (id: string) => api.get<OutboxMessage>(`/outbox/${id}`);
+export const fetchBackups = () => api.get<BackupStatus>('/backups');
+export const startBackup = () => api.post<BackupStatus>('/backups');

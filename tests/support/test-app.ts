@@ -30,6 +30,7 @@ export async function createTestApp(overrides: Partial<Config> = {}, options: { 
     store: new Store(dataSource),
     async close(keepFiles = false) {
       await shipkeeper.plans.idle();
+      await shipkeeper.backups.idle();
       shipkeeper.close();
       await fakeMail.stop();
       await dataSource.destroy();

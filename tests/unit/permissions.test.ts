@@ -20,6 +20,9 @@ const MATRIX: Record<string, Record<Role, boolean>> = {
   'settings.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
   'settings.update': { admin: true, curator: false, conservator: false, docent: false, fundraiser: false },
   'outbox.read': { admin: true, curator: false, conservator: false, docent: false, fundraiser: false },
+  // The administrator is responsible for backups.
+  'backup.read': { admin: true, curator: false, conservator: false, docent: false, fundraiser: false },
+  'backup.create': { admin: true, curator: false, conservator: false, docent: false, fundraiser: false },
   // The ship map: curators edit it, conservators keep the hazard registers, every staff role reads.
   'deck.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
   'deck.create': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
