@@ -28,7 +28,7 @@ export const updateSettingsBody = z
     contactEmail: refuseInvalidCharacters(z.string(), 'Contact e-mail').pipe(z.union([z.literal(''), z.email('Enter a valid e-mail address.')])),
     objectNumberPattern: refuseInvalidCharacters(z.string(), 'Pattern')
       .trim()
-      .max(40, 'A pattern has at most 40 characters.')
+      // patternProblem also caps the length and refuses adjacent numbers (NN), which no one could read apart.
       .superRefine((value, ctx) => {
         const problem = patternProblem(value);
         if (problem) ctx.addIssue({ code: 'custom', message: PATTERN_PROBLEM_MESSAGES[problem] });

@@ -43,6 +43,20 @@ describe('organisation settings', () => {
     expect(ok.body).toMatchObject({ organisationName: 'Test Trust', unitSystem: 'metric', country: 'GB' });
     expect((await admin.patch('/api/v1/settings', { organisationName: 'Again', version: current.version })).status).toBe(409);
   });
+
+  it('refuses an object-number pattern with numbers side by side, or longer than 40 characters, naming the field', async () => {
+    ctx = await createTestApp();
+    const { client: admin } = await signedInAs(ctx.app, ctx.store, 'admin');
+    const current = (await admin.get('/api/v1/settings')).body;
+    const adjacent = await admin.patch('/api/v1/settings', { objectNumberPattern: 'NNNNNNNNNNNNNN', version: current.version });
+    expect(adjacent.status).toBe(400);
+    expect(adjacent.body.error.fields).toEqual({ objectNumberPattern: 'Put a separator or a letter between two numbers of the pattern (NN or YYYYN cannot be told apart).' });
+    const long = await admin.patch('/api/v1/settings', { objectNumberPattern: 'N.'.repeat(20) + 'N', version: current.version });
+    expect(long.status).toBe(400);
+    expect(long.body.error.fields).toEqual({ objectNumberPattern: 'A pattern has at most 40 characters.' });
+    expect((await admin.get('/api/v1/settings')).body).toMatchObject({ objectNumberPattern: 'YYYY.N.N', version: current.version });
+    expect((await admin.patch('/api/v1/settings', { objectNumberPattern: 'SK YYYY.N-N', version: current.version })).status).toBe(200);
+  });
 });
 
 describe('outbox', () => {

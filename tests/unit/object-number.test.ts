@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkObjectNumber, objectNumberSortKey, patternExample, patternProblem } from '../../shared/calc/object-number.js';
+import { checkObjectNumber, matchesPattern, objectNumberSortKey, patternExample, patternProblem, PATTERN_PROBLEM_MESSAGES } from '../../shared/calc/object-number.js';
 import { matchExpression, mergeHighlights } from '../../server/search/search-index.js';
 
 // The three-part year.lot.item number is common practice in museum registration, no published source.
@@ -28,6 +28,69 @@ describe('object numbers', () => {
     expect(patternProblem('yyyy.n')).toBe('characters');
     expect(patternProblem('ABC')).toBe('no-number');
     expect(patternExample('SK-YYYY-N')).toBe('SK-2019-4');
+  });
+
+  it.each(['NN', 'NNNNNNNNNNNNNN', 'YYYYN', 'NYYYY', 'SK-YYYYYYYY', 'YYYY.NN'])('refuses %j: its numbers sit side by side', (pattern) => {
+    expect(patternProblem(pattern)).toBe('adjacent');
+  });
+
+  it('caps the pattern at 40 characters', () => {
+    expect(patternProblem('N.'.repeat(20))).toBeNull();
+    expect(patternProblem('N.'.repeat(20) + 'N')).toBe('long');
+    expect(PATTERN_PROBLEM_MESSAGES.long).toBe('A pattern has at most 40 characters.');
+  });
+
+  it('refuses a number longer than 40 characters before matching it', () => {
+    const refused = checkObjectNumber('1.'.repeat(20) + '1', 'N.'.repeat(19) + 'N');
+    expect(refused).toEqual({ ok: false, message: 'Object number must be at most 40 characters.' });
+  });
+
+  it('matches the same numbers as before for a pattern whose number has several splits', () => {
+    // Patterns stored before adjacent numbers were refused still work: NN is 2 to 12 digits, no leading zero.
+    expect(matchesPattern('12', 'NN')).toBe(true);
+    expect(matchesPattern('1234567', 'NN')).toBe(true);
+    expect(matchesPattern('123456789012', 'NN')).toBe(true);
+    expect(matchesPattern('1234567890123', 'NN')).toBe(false);
+    expect(matchesPattern('1', 'NN')).toBe(false);
+    expect(matchesPattern('0123', 'NN')).toBe(false);
+    expect(matchesPattern('20191', 'YYYYN')).toBe(true);
+    expect(matchesPattern('2019', 'YYYYN')).toBe(false);
+  });
+});
+
+/**
+ * Milliseconds per check in the slowest of several runs of 20 checks each, after one warm-up check.
+ * A run's mean rather than one call's time, so a shared machine's pause does not count as the check's.
+ */
+function worstMsPerCheck(check: () => unknown, runs = 5, calls = 20): number {
+  check();
+  let worst = 0;
+  for (let r = 0; r < runs && worst < 10; r++) {
+    const start = performance.now();
+    for (let c = 0; c < calls; c++) check();
+    worst = Math.max(worst, (performance.now() - start) / calls);
+  }
+  return worst;
+}
+
+// Issue 9: a backtracking regular expression took 0.8–7 s for a 31-character number against 14 N's.
+describe('object-number checks take linear time', () => {
+  const numbers = ['1'.repeat(31), '1'.repeat(30) + '.', '1'.repeat(40), '1'.repeat(39) + 'X', '1.'.repeat(19) + '1X', '9'.repeat(200) + '!'];
+
+  it.each(['N.N.N.N.N.N.N.N.N.N.N.N.N.N.N.N.N.N.N.N', 'N-N.N/N N-N.N/N N-N.N/N N-N.N/N N-N.N/N', 'YYYY.N.YYYY.N.YYYY.N.YYYY.N.YYYY.N.N.N'])(
+    'checks the worst numbers against the allowed pattern %j in under 10 ms',
+    (pattern) => {
+      expect(patternProblem(pattern)).toBeNull();
+      for (const number of numbers) expect(worstMsPerCheck(() => checkObjectNumber(number, pattern))).toBeLessThan(10);
+    },
+  );
+
+  it.each([14, 16, 40])('checks a 31-character number against a stored pattern of %i N in under 10 ms', (count) => {
+    const pattern = 'N'.repeat(count);
+    for (const number of ['1'.repeat(30) + '.', '1'.repeat(31) + 'X', '1'.repeat(31)]) {
+      expect(worstMsPerCheck(() => checkObjectNumber(number, pattern))).toBeLessThan(10);
+      expect(worstMsPerCheck(() => matchesPattern(number, pattern))).toBeLessThan(10);
+    }
   });
 
   it('sorts numbers naturally', () => {
