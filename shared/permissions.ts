@@ -28,8 +28,9 @@ export const PERMISSIONS = {
   conditionReport: { read: STAFF, readFindings: ['admin', 'curator', 'conservator'], create: CONSERVATOR, update: CONSERVATOR, delete: CONSERVATOR, submit: ['conservator', 'curator'], amend: CONSERVATOR },
   /** Curators log incidents too: they find vandalism on their rounds and close spaces. */
   risk: { read: STAFF, create: CONSERVATOR, update: CONSERVATOR, delete: CONSERVATOR },
-  incident: { read: STAFF, create: ['conservator', 'curator'], update: ['conservator', 'curator'] },
-  media: { read: STAFF, create: ['curator', 'conservator'], update: ['curator', 'conservator'], delete: ['curator', 'conservator'] },
+  /** Docents find damage on tours and log it; a conservator or curator completes the record. */
+  incident: { read: STAFF, create: ['conservator', 'curator', 'docent'], update: ['conservator', 'curator'] },
+  media: { read: STAFF, create: ['curator', 'conservator', 'docent'], update: ['curator', 'conservator'], delete: ['curator', 'conservator'] },
 } as const satisfies Record<string, Record<string, readonly Role[]>>;
 
 export type Resource = keyof typeof PERMISSIONS;
@@ -55,9 +56,10 @@ export function can<R extends Resource>(role: Role | null | undefined, resource:
 export const MEDIA_OWNERS = {
   artifact: { resource: 'artifact', read: 'read' },
   compartment: { resource: 'compartment', read: 'read' },
-  incident: { resource: 'incident', read: 'read' },
+  /** Whoever may log an incident may add its photos (attach); changing them takes update. */
+  incident: { resource: 'incident', read: 'read', attach: 'create' },
   'condition-report': { resource: 'conditionReport', read: 'readFindings' },
-} as const satisfies Record<MediaOwnerType, { resource: Resource; read: string }>;
+} as const satisfies Record<MediaOwnerType, { resource: Resource; read: string; attach?: string }>;
 
 /** Whether the role may see the files of this kind of record: listed, described or served, in any response. */
 export function canReadMediaOf(role: Role | null | undefined, ownerType: MediaOwnerType): boolean {

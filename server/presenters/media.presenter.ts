@@ -8,7 +8,9 @@ export function mediaUrl(id: number, variant: 'thumb' | 'display' | 'original'):
 
 /** Whether a role may add, change or delete files on this kind of record. */
 export function canChangeMediaOf(role: Express.User['role'], ownerType: MediaOwnerType, action: 'create' | 'update' | 'delete'): boolean {
-  return can(role, 'media', action) && can(role, MEDIA_OWNERS[ownerType].resource, 'update');
+  const owner: { resource: (typeof MEDIA_OWNERS)[MediaOwnerType]['resource']; attach?: string } = MEDIA_OWNERS[ownerType];
+  const needs = action === 'create' && owner.attach ? owner.attach : 'update';
+  return can(role, 'media', action) && can(role, owner.resource, needs as never);
 }
 
 /** `locked`: the record no longer changes (a submitted report), so neither do its files. */

@@ -244,13 +244,14 @@ export class ConditionReportService {
     });
     if (critical.findings.length) {
       const n = critical.findings.length;
-      await this.alerts.tellCurators(
+      await this.alerts.tellKeepers(
         `Critical finding${n > 1 ? 's' : ''} on ${critical.subject.label}`,
         [
           `Condition report ${id} on ${critical.subject.label}, submitted by ${viewer.name}, records ${n === 1 ? 'a critical finding' : `${n} critical findings`}:`,
           ...critical.findings.map((f) => `${DAMAGE_TYPES[f.damageType].label} (${AGENT_LABELS[f.agent].toLowerCase()})${f.artifact ? ` on ${f.artifact.objectNumber} ${f.artifact.name}` : ''}: ${f.recommendedAction || 'no action recommended yet'}.`),
         ],
         `/app/condition/${id}`,
+        viewer.id,
       );
     }
     return this.present(id, viewer);

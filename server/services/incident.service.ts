@@ -112,7 +112,9 @@ export class IncidentService {
       for (const [type, ids] of [['artifact', artifactIds], ['compartment', compartmentIds]] as const) {
         for (const id of ids) {
           await repos.incidents.link(incident.id, type, id);
-          const report = await this.reports.openDraftWithFinding(repos, { type, id }, { inspectedOn: body.foundOn, summary: `Opened by incident ${incident.id}: ${body.title}` }, finding, viewer.id);
+          // a docent's incident opens drafts with no surveyor: a conservator completes them
+          const surveyorId = can(viewer.role, 'conditionReport', 'create') ? viewer.id : null;
+          const report = await this.reports.openDraftWithFinding(repos, { type, id }, { inspectedOn: body.foundOn, summary: `Opened by incident ${incident.id}: ${body.title}` }, finding, surveyorId);
           reportIds.push(report.id);
         }
       }
@@ -145,7 +147,7 @@ export class IncidentService {
     });
     const presented = await this.get(saved.id, viewer);
     const affected = [...presented.artifacts, ...presented.compartments].map((s) => s.label);
-    await this.alerts.tellCurators(
+    await this.alerts.tellKeepers(
       `${INCIDENT_KIND_LABELS[presented.kind]}: ${presented.title}`,
       [
         `${viewer.name} logged an incident found on ${presented.foundOn}${presented.occurredOn ? ` (it happened on ${presented.occurredOn})` : ''}: ${presented.title}.`,
@@ -155,6 +157,7 @@ export class IncidentService {
         ...(presented.policeReference ? [`Police reference: ${presented.policeReference}.`] : []),
       ],
       `/app/incidents/${presented.id}`,
+      viewer.id,
     );
     return presented;
   }

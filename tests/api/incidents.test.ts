@@ -80,12 +80,28 @@ describe('incidents', () => {
     expect(ctx.fakeMail.list()).toHaveLength(0);
   });
 
-  it('is logged by conservators and curators, and read by everyone on the staff', async () => {
-    const docent = (await signedInAs(ctx.app, ctx.store, 'docent')).client;
-    expect((await docent.post('/api/v1/incidents', { vesselId, kind: 'other', title: 'X', foundOn: '2026-11-29' })).status).toBe(403);
-    const logged = await curator.post('/api/v1/incidents', { vesselId, kind: 'accident', title: 'Visitor knocked a valve wheel', foundOn: '2026-11-29' });
-    expect(logged.status).toBe(201);
-    expect((await docent.get(`/api/v1/incidents/${logged.body.id}`)).body.title).toBe('Visitor knocked a valve wheel');
+  it('is logged by docents too, with photos; a conservator completes the drafts, and curators and conservators are told', async () => {
+    const { cameraJpeg } = await import('../support/images.js');
+    const { client: docent, user: docentUser } = await signedInAs(ctx.app, ctx.store, 'docent');
+    const conservatorEmail = (await ctx.store.repos.users.activeWithRole('conservator'))[0]!.email;
+    const curatorEmail = (await ctx.store.repos.users.activeWithRole('curator'))[0]!.email;
+    const logged = await docent.post('/api/v1/incidents', { vesselId, kind: 'vandalism', title: 'Graffiti on the gauge board', foundOn: '2026-11-29', artifactIds: [gaugeId] });
+    expect(logged.status, JSON.stringify(logged.body)).toBe(201);
+    for (const to of [curatorEmail, conservatorEmail]) expect((await waitForMail(ctx.fakeMail, to)).subject).toBe('Vandalism: Graffiti on the gauge board');
+    expect(ctx.fakeMail.list().some((m) => m.to.includes(docentUser.email))).toBe(false);
+    const draft = (await conservator.get(`/api/v1/condition-reports/${logged.body.reportIds[0]}`)).body;
+    expect(draft).toMatchObject({ status: 'draft', surveyor: null });
+    // the docent adds the photos of what was found, but changes nothing else
+    const photo = await docent.agent.post(`/api/v1/media?ownerType=incident&ownerId=${logged.body.id}`).set('x-csrf-token', docent.csrf).attach('file', await cameraJpeg(), 'found.jpg');
+    expect(photo.status, JSON.stringify(photo.body)).toBe(201);
+    expect((await docent.patch(`/api/v1/media/${photo.body.id}`, { caption: 'x', version: photo.body.version })).status).toBe(403);
+    const onArtifact = await docent.agent.post(`/api/v1/media?ownerType=artifact&ownerId=${gaugeId}`).set('x-csrf-token', docent.csrf).attach('file', await cameraJpeg(), 'a.jpg');
+    expect(onArtifact.status).toBe(403);
+    expect((await docent.patch(`/api/v1/incidents/${logged.body.id}`, { actionsTaken: 'x', version: logged.body.version })).status).toBe(403);
+    expect((await conservator.patch(`/api/v1/incidents/${logged.body.id}`, { actionsTaken: 'Board cleaned', version: logged.body.version })).status).toBe(200);
+    const fundraiser = (await signedInAs(ctx.app, ctx.store, 'fundraiser')).client;
+    expect((await fundraiser.post('/api/v1/incidents', { vesselId, kind: 'other', title: 'X', foundOn: '2026-11-29' })).status).toBe(403);
+    expect((await fundraiser.get(`/api/v1/incidents/${logged.body.id}`)).body.title).toBe('Graffiti on the gauge board');
   });
 });
 
@@ -130,8 +146,10 @@ describe('photos of an incident', () => {
     const res = await conservator.agent.post(`/api/v1/media?ownerType=incident&ownerId=${incident.id}`).set('x-csrf-token', conservator.csrf).attach('file', await cameraJpeg(), 'scene.jpg');
     expect(res.status).toBe(201);
     const docent = (await signedInAs(ctx.app, ctx.store, 'docent')).client;
-    expect((await docent.agent.post(`/api/v1/media?ownerType=incident&ownerId=${incident.id}`).set('x-csrf-token', docent.csrf).attach('file', await cameraJpeg(), 'x.jpg')).status).toBe(403);
-    expect((await docent.get(`/api/v1/media?ownerType=incident&ownerId=${incident.id}`)).body).toHaveLength(1);
+    expect((await docent.agent.post(`/api/v1/media?ownerType=incident&ownerId=${incident.id}`).set('x-csrf-token', docent.csrf).attach('file', await cameraJpeg(), 'x.jpg')).status).toBe(201);
+    const fundraiser = (await signedInAs(ctx.app, ctx.store, 'fundraiser')).client;
+    expect((await fundraiser.agent.post(`/api/v1/media?ownerType=incident&ownerId=${incident.id}`).set('x-csrf-token', fundraiser.csrf).attach('file', await cameraJpeg(), 'x.jpg')).status).toBe(403);
+    expect((await fundraiser.get(`/api/v1/media?ownerType=incident&ownerId=${incident.id}`)).body).toHaveLength(2);
   });
 });
 

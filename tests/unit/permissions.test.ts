@@ -56,11 +56,11 @@ const MATRIX: Record<string, Record<Role, boolean>> = {
   'risk.update': { admin: false, curator: false, conservator: true, docent: false, fundraiser: false },
   'risk.delete': { admin: false, curator: false, conservator: true, docent: false, fundraiser: false },
   'incident.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
-  'incident.create': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
+  'incident.create': { admin: false, curator: true, conservator: true, docent: true, fundraiser: false },
   'incident.update': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
   // Files: curators and conservators, further limited to records their role may change (media.presenter.ts).
   'media.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
-  'media.create': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
+  'media.create': { admin: false, curator: true, conservator: true, docent: true, fundraiser: false },
   'media.update': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
   'media.delete': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
 };

@@ -11,7 +11,7 @@ import { DEMO_INCIDENTS, DEMO_REPORTS, DEMO_RISKS } from './demo-condition.js';
 
 
 /** The demo seeds no mail: nobody needs alerts about invented events. */
-const quiet = { tellCurators: async () => undefined } as unknown as ConditionAlerts;
+const quiet = { tellKeepers: async () => undefined } as unknown as ConditionAlerts;
 
 /**
  * Condition reports over four years, two incidents (one that closed a space) and a risk register,
