@@ -2,6 +2,7 @@ import { compartmentFigures, designationWarnings } from '../../shared/calc/compa
 import { parseNavyDesignation } from '../../shared/calc/designation.js';
 import { can } from '../../shared/permissions.js';
 import type { Compartment } from '../../shared/schemas/compartments.js';
+import { cautionsFor } from '../../shared/schemas/hazard-cautions.js';
 import { ENTRY_CAUTION, ENTRY_CAUTION_KINDS, type HazardKind } from '../../shared/schemas/hazards.js';
 import type { DesignationScheme } from '../../shared/schemas/vessels.js';
 import type { CompartmentEntity } from '../db/entities/compartment.entity.js';
@@ -32,6 +33,7 @@ export function presentCompartment(
     ...figures,
     hazardKinds,
     entryCaution: hazardKinds.some((k) => ENTRY_CAUTION_KINDS.includes(k)) ? ENTRY_CAUTION : null,
+    hazardCautions: cautionsFor(hazardKinds),
     createdAt: compartment.createdAt.toISOString(),
     updatedAt: compartment.updatedAt.toISOString(),
     version: compartment.version,

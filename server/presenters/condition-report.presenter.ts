@@ -1,5 +1,5 @@
-import { HAZARD_CAUTIONS } from '../../shared/hazard-cautions.js';
-import { HAZARD_LABELS, type HazardKind } from '../../shared/schemas/hazards.js';
+import { cautionsFor } from '../../shared/schemas/hazard-cautions.js';
+import type { HazardKind } from '../../shared/schemas/hazards.js';
 import { gradeFromFindings } from '../../shared/calc/condition-grade.js';
 import { can } from '../../shared/permissions.js';
 import type { ConditionReport, ConditionReportSummary, Finding } from '../../shared/schemas/condition.js';
@@ -64,7 +64,7 @@ export function presentReport(report: ConditionReportEntity, subjectLabel: strin
     gradeOverride: report.gradeOverride,
     overrideReason: readFindings ? report.overrideReason : null,
     findings: readFindings ? findings.map(presentFinding) : null,
-    subjectHazards: hazardKinds.map((kind) => ({ kind, label: HAZARD_LABELS[kind], caution: HAZARD_CAUTIONS[kind] })),
+    subjectHazards: cautionsFor(hazardKinds),
     version: report.version,
     abilities: {
       update: draft && can(viewer.role, 'conditionReport', 'update'),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { hazardCautions } from './hazard-cautions.js';
 import { listQuery, pageOf } from './common.js';
 import { freeText, line, text } from './text.js';
 import { HAZARD_KINDS } from './hazards.js';
@@ -33,6 +34,8 @@ export const compartment = z
     perimeter: z.object({ metres: z.number(), feet: z.number() }).nullable(),
     hazardKinds: z.array(z.enum(HAZARD_KINDS)),
     entryCaution: z.string().nullable(),
+    /** Every hazard recorded here with its own caution. */
+    hazardCautions,
     createdAt: z.string(),
     updatedAt: z.string(),
     version: z.number().int(),

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { HAZARD_KINDS } from './hazards.js';
+import { hazardCautions } from './hazard-cautions.js';
 import { GRADES, SEVERITIES } from '../calc/condition-grade.js';
 import { RUST_DISTRIBUTIONS } from '../calc/rust-grade.js';
 import { listQuery, pageOf } from './common.js';
@@ -191,7 +191,7 @@ export const conditionReport = conditionReportSummary
     /** Null for roles that read summaries only. */
     findings: z.array(finding).nullable(),
     /** The hazards recorded where the subject is (an artifact's are its compartment's), each with its caution. */
-    subjectHazards: z.array(z.object({ kind: z.enum(HAZARD_KINDS), label: z.string(), caution: z.string() })),
+    subjectHazards: hazardCautions,
     version: z.number().int(),
     abilities: z.object({ update: z.boolean(), submit: z.boolean(), amend: z.boolean(), delete: z.boolean(), readFindings: z.boolean() }),
   })

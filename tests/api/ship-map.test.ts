@@ -201,6 +201,19 @@ describe('compartments', () => {
 });
 
 describe('hazards', () => {
+  it('every hazard kind brings its own caution to the compartment, lead paint included', async () => {
+    const conservator = await signedInAs(ctx.app, ctx.store, 'conservator');
+    const deck = await addDeck('Second deck', '2');
+    const room = (await curator.post(`/api/v1/vessels/${vesselId}/compartments`, { deckId: deck.id, designation: '2-62-0-E', name: 'Engine room' })).body;
+    expect(room.hazardCautions).toEqual([]);
+    await conservator.client.post(`/api/v1/compartments/${room.id}/hazards`, { kind: 'lead-paint', notes: 'Engine columns tested positive' });
+    await conservator.client.post(`/api/v1/compartments/${room.id}/hazards`, { kind: 'steep-ladder' });
+    const after = (await curator.get(`/api/v1/compartments/${room.id}`)).body;
+    expect(after.entryCaution).toBeNull();
+    expect(after.hazardCautions.map((h: { kind: string }) => h.kind)).toEqual(['lead-paint', 'steep-ladder']);
+    expect(after.hazardCautions[0]).toMatchObject({ label: 'Lead-based paint', caution: expect.stringMatching(/lead-safe methods.*site safety plan and local codes/) });
+  });
+
   it('a confined space or asbestos puts the entry caution on the compartment; the check is signed', async () => {
     const conservator = await signedInAs(ctx.app, ctx.store, 'conservator');
     const deck = await addDeck('Fourth deck', '4');

@@ -19,6 +19,7 @@ export function compartmentFixture(overrides: Partial<Compartment> = {}): Compar
     perimeter: null,
     hazardKinds: [],
     entryCaution: null,
+    hazardCautions: [],
     createdAt: '2026-01-01T00:00:00.000Z',
     updatedAt: '2026-01-01T00:00:00.000Z',
     version: 1,
