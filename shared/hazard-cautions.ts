@@ -9,14 +9,14 @@ const DEFER = 'Follow the site safety plan and local codes.';
  * construction, 29 CFR 1926.1101; OSHA shipyard confined spaces, 29 CFR 1915 subpart B).
  */
 export const HAZARD_CAUTIONS: Record<HazardKind, string> = {
-  asbestos: `Asbestos-containing material is recorded here. Do not disturb, cut, drill, sand or remove it; repair and removal are for a licensed asbestos abatement contractor. ${DEFER}`,
-  'lead-paint': `Lead-based paint is recorded here. No dry sanding, scraping, wire-brushing, grinding, blasting or heat: work that disturbs it is for trained, certified workers using lead-safe methods. ${DEFER}`,
-  'confined-space': `Confined space. No entry without a confined-space entry permit, a tested atmosphere (a marine chemist’s certificate where required), an attendant outside and a rescue plan. ${DEFER}`,
-  'low-headroom': `Low headroom. Wear a hard hat and watch overhead. ${DEFER}`,
-  'steep-ladder': `Steep ladder. Face the ladder, keep three points of contact and carry nothing in your hands. ${DEFER}`,
-  'trip-hazard': `Trip hazards: coamings, deck plates and gratings. Keep to the lit walkway. ${DEFER}`,
-  electrical: `Electrical hazard. Treat every circuit as live until a qualified person has isolated, locked and tagged it out. ${DEFER}`,
-  other: `A hazard is recorded here; read its notes before any work. ${DEFER}`,
+  asbestos: `Do not disturb, cut, drill, sand or remove it; repair and removal are for a licensed asbestos abatement contractor. ${DEFER}`,
+  'lead-paint': `No dry sanding, scraping, wire-brushing, grinding, blasting or heat: work that disturbs it is for trained, certified workers using lead-safe methods. ${DEFER}`,
+  'confined-space': `No entry without a confined-space entry permit, a tested atmosphere (a marine chemist’s certificate where required), an attendant outside and a rescue plan. ${DEFER}`,
+  'low-headroom': `Wear a hard hat and watch overhead. ${DEFER}`,
+  'steep-ladder': `Face the ladder, keep three points of contact and carry nothing in your hands. ${DEFER}`,
+  'trip-hazard': `Coamings, deck plates and gratings: keep to the lit walkway. ${DEFER}`,
+  electrical: `Treat every circuit as live until a qualified person has isolated, locked and tagged it out. ${DEFER}`,
+  other: `Read the hazard’s notes before any work. ${DEFER}`,
 };
 
 export interface WorkCaution {
@@ -37,10 +37,10 @@ export function workCautions(hazards: readonly HazardKind[], damageType: DamageT
   const has = (kind: HazardKind) => hazards.includes(kind);
   const out: WorkCaution[] = [];
   if (has('lead-paint') && DISTURBS_PAINT.test(action)) {
-    out.push({ kind: 'lead-paint', message: `This action would disturb lead-based paint. ${HAZARD_CAUTIONS['lead-paint']}` });
+    out.push({ kind: 'lead-paint', message: `This action would disturb the lead-based paint recorded here. ${HAZARD_CAUTIONS['lead-paint']}` });
   }
   if (has('asbestos') && (damageType === 'lagging-damage' || TOUCHES_LAGGING.test(action) || HOT_WORK.test(action))) {
-    out.push({ kind: 'asbestos', message: `Work on or near lagging where asbestos is recorded. ${HAZARD_CAUTIONS.asbestos}` });
+    out.push({ kind: 'asbestos', message: `Work on or near lagging where asbestos-containing material is recorded. ${HAZARD_CAUTIONS.asbestos}` });
   }
   if (has('confined-space')) {
     out.push({ kind: 'confined-space', message: `Any work here means entering a confined space. ${HAZARD_CAUTIONS['confined-space']}` });

@@ -282,8 +282,8 @@ describe('hazards where the work is written', () => {
     const { text } = await extractText(await getDocumentProxy(new Uint8Array(res.body as Buffer)), { mergePages: true });
     const flat = text.replace(/\s+/g, ' ');
     expect(flat).toContain('Hazards recorded here');
-    expect(flat).toContain('Lead-based paint: Lead-based paint is recorded here.');
-    expect(flat).toContain('Asbestos-containing material: Asbestos-containing material is recorded here.');
-    expect(flat).toContain('Caution: This action would disturb lead-based paint.');
+    expect(flat).toContain('Lead-based paint: No dry sanding, scraping, wire-brushing');
+    expect(flat).toContain('Asbestos-containing material: Do not disturb, cut, drill, sand or remove it');
+    expect(flat).toContain('Caution: This action would disturb the lead-based paint recorded here.');
   });
 });
