@@ -45,6 +45,7 @@ import { CompartmentService } from './services/compartment.service.js';
 import { ConditionAlerts } from './services/condition-alerts.js';
 import { ConditionReportService } from './services/condition-report.service.js';
 import { IncidentService } from './services/incident.service.js';
+import { ClosureService } from './services/closure.service.js';
 import { RiskService } from './services/risk.service.js';
 import { DeckService } from './services/deck.service.js';
 import { HazardService } from './services/hazard.service.js';
@@ -120,7 +121,8 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
   const alerts = new ConditionAlerts(store, mailer, config);
   const conditionReports = new ConditionReportService(store, alerts, files);
   conditionReportRoutes(api, conditionReports);
-  incidentRoutes(api, new IncidentService(store, conditionReports, alerts));
+  const closures = new ClosureService(store);
+  incidentRoutes(api, new IncidentService(store, conditionReports, alerts), closures);
   riskRoutes(api, new RiskService(store));
   mediaRoutes(api, new MediaService(store, files), { incomingDir: files.incoming, maxBytes: config.mediaMaxBytes });
   calcRoutes(api);
@@ -132,6 +134,7 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
     health: new HealthService(dataSource, fakeMail, version),
     vessels,
     settings,
+    closures,
     openApi: () => (openApi ??= buildOpenApiDocument(api.routes, version)),
   });
 

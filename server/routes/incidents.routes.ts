@@ -1,12 +1,26 @@
 import { idParam } from '../../shared/schemas/common.js';
-import { createIncidentBody, incident, incidentPage, incidentsQuery, updateIncidentBody } from '../../shared/schemas/incidents.js';
+import { z } from 'zod';
+import { vesselParam } from '../../shared/schemas/decks.js';
+import { closure, createIncidentBody, incident, incidentPage, incidentsQuery, updateIncidentBody } from '../../shared/schemas/incidents.js';
 import type { ApiRouter } from '../http/api-router.js';
 import { allowed } from '../http/access.js';
 import { actorOf } from '../services/audit.service.js';
+import type { ClosureService } from '../services/closure.service.js';
 import type { IncidentService } from '../services/incident.service.js';
 
-export function incidentRoutes(api: ApiRouter, incidents: IncidentService) {
+export function incidentRoutes(api: ApiRouter, incidents: IncidentService, closures: ClosureService) {
   const tag = 'Condition';
+
+  api.route({
+    method: 'get',
+    path: '/vessels/:vesselId/closures',
+    tag,
+    summary: 'Spaces closed to visitors now by an incident: since when, the public line, and the incident',
+    access: allowed('incident', 'read'),
+    params: vesselParam,
+    response: z.array(closure),
+    handler: ({ params }) => closures.current(params.vesselId),
+  });
 
   api.route({
     method: 'get',
@@ -23,7 +37,7 @@ export function incidentRoutes(api: ApiRouter, incidents: IncidentService) {
     method: 'post',
     path: '/incidents',
     tag,
-    summary: 'Log an incident: may close affected compartments to visitors, opens a draft report with a finding on each affected item, and e-mails the curators',
+    summary: 'Log an incident: may close affected compartments to visitors, opens a draft report with a finding on each affected item, and e-mails the curators and conservators',
     access: allowed('incident', 'create'),
     body: createIncidentBody,
     status: 201,

@@ -3,11 +3,12 @@ import { healthResponse } from '../../shared/schemas/health.js';
 import { visitSite } from '../../shared/schemas/visit.js';
 import type { ApiRouter } from '../http/api-router.js';
 import { anyone } from '../http/access.js';
+import type { ClosureService } from '../services/closure.service.js';
 import type { HealthService } from '../services/health.service.js';
 import type { SettingsService } from '../services/settings.service.js';
 import type { VesselService } from '../services/vessel.service.js';
 
-export function publicRoutes(api: ApiRouter, deps: { health: HealthService; vessels: VesselService; settings: SettingsService; openApi: () => object }) {
+export function publicRoutes(api: ApiRouter, deps: { health: HealthService; vessels: VesselService; settings: SettingsService; closures: ClosureService; openApi: () => object }) {
   api.route({
     method: 'get',
     path: '/health',
@@ -36,9 +37,13 @@ export function publicRoutes(api: ApiRouter, deps: { health: HealthService; vess
     method: 'get',
     path: '/visit/site',
     tag: 'Visit',
-    summary: 'What the public site shows: the organisation and the vessels it keeps',
+    summary: 'What the public site shows: the organisation, the vessels it keeps, and the spaces closed today with the public line why',
     access: anyone,
     response: visitSite,
-    handler: async () => ({ organisationName: (await deps.settings.get()).organisationName, vessels: await deps.vessels.listPublic() }),
+    handler: async () => {
+      const vessels = await deps.vessels.listPublic();
+      const withClosures = await Promise.all(vessels.map(async (v) => ({ ...v, closures: await deps.closures.publicFor(v.id) })));
+      return { organisationName: (await deps.settings.get()).organisationName, vessels: withClosures };
+    },
   });
 }

@@ -1,5 +1,5 @@
 import type { Agent, DamageType } from '../../shared/schemas/condition.js';
-import { INCIDENT_KIND_LABELS, type IncidentKind, type IncidentsQuery, type UpdateIncidentBody, type createIncidentBody } from '../../shared/schemas/incidents.js';
+import { DEFAULT_CLOSURE_NOTE, INCIDENT_KIND_LABELS, type IncidentKind, type IncidentsQuery, type UpdateIncidentBody, type createIncidentBody } from '../../shared/schemas/incidents.js';
 import type { Incident } from '../../shared/schemas/incidents.js';
 import type { z } from 'zod';
 import type { IncidentSubjectEntity } from '../db/entities/incident-subject.entity.js';
@@ -64,6 +64,7 @@ export class IncidentService {
       artifacts,
       compartments,
       closedCompartmentIds: incident.closedCompartmentIds,
+      publicNote: incident.publicNote,
       reportIds: incident.reportIds,
       loggedBy: incident.loggedBy ? { id: incident.loggedBy.id, name: incident.loggedBy.name } : null,
       createdAt: incident.createdAt.toISOString(),
@@ -106,7 +107,8 @@ export class IncidentService {
       if (!vessel) throw new UnprocessableError('Choose a vessel.', { vesselId: 'No such vessel.' });
       await this.checkSubjects(repos, vessel.id, artifactIds, compartmentIds);
       const { artifactIds: _a, compartmentIds: _c, closeCompartmentIds: _x, severity, ...fields } = body;
-      const incident = await repos.incidents.create({ ...fields, closedCompartmentIds: [], reportIds: [], loggedById: viewer.id });
+      const publicNote = fields.publicNote || (closing.length ? DEFAULT_CLOSURE_NOTE : '');
+      const incident = await repos.incidents.create({ ...fields, publicNote, closedCompartmentIds: [], reportIds: [], loggedById: viewer.id });
       const reportIds: number[] = [];
       const finding = { ...FINDING_OF[body.kind], severity, description: `${INCIDENT_KIND_LABELS[body.kind]} (incident ${incident.id}): ${body.title}. ${body.description}`.trim() };
       for (const [type, ids] of [['artifact', artifactIds], ['compartment', compartmentIds]] as const) {
@@ -169,7 +171,7 @@ export class IncidentService {
       if (incident.version !== body.version) throw await staleEditError(repos, 'incident', id, 'this incident', incident.version, body.version);
       const { version: _v, ...fields } = body;
       if (fields.occurredOn !== undefined) checkDates(incident.foundOn, fields.occurredOn);
-      const changes = changesBetween(incident, fields, ['title', 'occurredOn', 'description', 'reportedTo', 'policeReference', 'actionsTaken']);
+      const changes = changesBetween(incident, fields, ['title', 'occurredOn', 'description', 'reportedTo', 'policeReference', 'actionsTaken', 'publicNote']);
       if (!changes) return;
       Object.assign(incident, fields);
       await repos.incidents.save(incident);

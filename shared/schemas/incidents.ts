@@ -32,6 +32,8 @@ export const incident = z
     artifacts: z.array(z.object({ id: z.number().int(), label: z.string() })),
     compartments: z.array(z.object({ id: z.number().int(), label: z.string() })),
     closedCompartmentIds: z.array(z.number().int()),
+    /** Why the closed spaces are closed, in one line the public may read. */
+    publicNote: z.string(),
     /** Draft condition reports the incident opened, one per affected item, each with its finding. */
     reportIds: z.array(z.number().int()),
     loggedBy: z.object({ id: z.number().int(), name: z.string() }).nullable(),
@@ -66,6 +68,8 @@ export const createIncidentBody = z
     compartmentIds: ids('Compartments').default([]),
     /** Affected compartments to close to visitors now (their access becomes staff only). */
     closeCompartmentIds: ids('Compartments to close').default([]),
+    /** Shown to visitors while the spaces are closed; without it, a plain default line. */
+    publicNote: line(200, 'Public note').default(''),
     /** Severity of the finding written on each affected item. */
     severity: z.enum(SEVERITIES, { error: 'Choose slight, moderate, severe or critical.' }).default('moderate'),
   })
@@ -80,9 +84,22 @@ export const updateIncidentBody = z
     reportedTo: line(300, 'Reported to'),
     policeReference: line(100, 'Police reference'),
     actionsTaken: freeText(4000, 'Actions taken'),
+    publicNote: line(200, 'Public note'),
     version: z.number().int().min(1),
   })
   .partial()
   .required({ version: true })
   .meta({ id: 'UpdateIncidentBody' });
 export type UpdateIncidentBody = z.infer<typeof updateIncidentBody>;
+
+/** A space closed to visitors now, and why, as the staff see it. */
+export const closure = z
+  .object({ compartmentId: z.number().int(), label: z.string(), since: z.string(), reason: z.string(), incidentId: z.number().int() })
+  .meta({ id: 'Closure' });
+export type Closure = z.infer<typeof closure>;
+
+/** The same as the public may read it: the space's name, since when, and the public line only. */
+export const publicClosure = z.object({ space: z.string(), since: z.string(), reason: z.string() }).meta({ id: 'PublicClosure' });
+export type PublicClosure = z.infer<typeof publicClosure>;
+
+export const DEFAULT_CLOSURE_NOTE = 'Closed for now while the crew deal with damage found here.';

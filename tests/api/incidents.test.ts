@@ -167,3 +167,36 @@ describe('incident dates', () => {
     expect((await docent.get(`/api/v1/incidents/${ok.id}`)).body.abilities).toEqual({ update: false });
   });
 });
+
+describe("today's closures", () => {
+  it('lists spaces an incident closed until they open again; the public sees the space, the date and the public line only', async () => {
+    const logged = await conservator.post('/api/v1/incidents', {
+      vesselId,
+      kind: 'vandalism',
+      title: 'Paint thrown in the magazine',
+      foundOn: '2026-11-29',
+      description: 'Internal: suspect seen on camera 3',
+      policeReference: 'PR-SECRET-77',
+      compartmentIds: [place.second],
+      closeCompartmentIds: [place.second],
+      publicNote: 'Closed while the paintwork is cleaned.',
+    });
+    expect(logged.status).toBe(201);
+    const staff = await curator.get(`/api/v1/vessels/${vesselId}/closures`);
+    expect(staff.body).toEqual([{ compartmentId: place.second, label: '1-40-2-M Magazine', since: '2026-11-29', reason: 'Closed while the paintwork is cleaned.', incidentId: logged.body.id }]);
+    const { Client } = await import('../support/http.js');
+    const site = await new Client(ctx.app).get('/api/v1/visit/site');
+    const vessel = site.body.vessels.find((v: { id: number }) => v.id === vesselId);
+    expect(vessel.closures).toEqual([{ space: 'Magazine', since: '2026-11-29', reason: 'Closed while the paintwork is cleaned.' }]);
+    expect(JSON.stringify(site.body)).not.toMatch(/camera 3|PR-SECRET-77|Paint thrown/);
+    expect((await new Client(ctx.app).get(`/api/v1/vessels/${vesselId}/closures`)).status).toBe(401);
+
+    // a closure without a public line gets a plain one; opening the space ends its closure
+    const room = (await curator.get(`/api/v1/compartments/${place.second}`)).body;
+    await curator.patch(`/api/v1/compartments/${place.second}`, { accessStatus: 'open', version: room.version });
+    expect((await curator.get(`/api/v1/vessels/${vesselId}/closures`)).body).toEqual([]);
+    const again = await conservator.post('/api/v1/incidents', { vesselId, kind: 'accident', title: 'Ladder rung loose', foundOn: '2026-11-30', compartmentIds: [place.second], closeCompartmentIds: [place.second] });
+    expect(again.body.publicNote).toBe('Closed for now while the crew deal with damage found here.');
+    expect((await curator.get(`/api/v1/vessels/${vesselId}/closures`)).body).toMatchObject([{ since: '2026-11-30', incidentId: again.body.id }]);
+  });
+});

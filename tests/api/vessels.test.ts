@@ -64,6 +64,6 @@ describe('vessels', () => {
     expect((await client.get('/api/v1/visit/site')).body.vessels).toEqual([]);
     await client.post(`/api/v1/vessels/${vessel.id}/restore`);
     const site = await client.get('/api/v1/visit/site');
-    expect(site.body.vessels).toEqual([{ id: vessel.id, name: 'Tug Sample', vesselType: 'Steam tug', builtYear: 1910, berth: 'Test berth', summary: '' }]);
+    expect(site.body.vessels).toEqual([{ id: vessel.id, name: 'Tug Sample', vesselType: 'Steam tug', builtYear: 1910, berth: 'Test berth', summary: '', closures: [] }]);
   });
 });

@@ -43,6 +43,10 @@ export class IncidentEntity {
   @Column({ type: 'simple-json' })
   closedCompartmentIds: number[];
 
+  /** Why the closed spaces are closed, in one line the public may read. */
+  @Column({ type: 'varchar', length: 200, default: '' })
+  publicNote: string;
+
   @Column({ type: 'simple-json' })
   reportIds: number[];
 

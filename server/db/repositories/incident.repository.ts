@@ -29,6 +29,13 @@ export class IncidentRepository {
     return pageOf(qb, query);
   }
 
+  /** Incidents that closed spaces, newest first; of one vessel or of all. */
+  closing(vesselId?: number) {
+    const qb = this.repo.createQueryBuilder('incident').where(`incident.closedCompartmentIds != '[]'`);
+    if (vesselId !== undefined) qb.andWhere('incident.vesselId = :vesselId', { vesselId });
+    return qb.orderBy('incident.foundOn', 'DESC').addOrderBy('incident.id', 'DESC').getMany();
+  }
+
   /** Incidents that affected a subject, newest first. */
   forSubject(subjectType: 'artifact' | 'compartment', subjectId: number) {
     return this.repo

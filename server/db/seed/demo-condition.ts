@@ -52,6 +52,8 @@ export interface DemoIncident {
   artifacts: string[];
   compartments: string[];
   close: string[];
+  /** Why the closed spaces are closed, for visitors. */
+  publicNote: string;
   severity: Severity;
   reportedTo: string;
   policeReference: string;
@@ -67,6 +69,7 @@ export const DEMO_INCIDENTS: DemoIncident[] = [
     artifacts: ['2003.1.3'],
     compartments: ['1-45-1-Q'],
     close: ['1-45-1-Q'],
+    publicNote: 'Closed while the office’s clock and counter are repaired.',
     severity: 'severe',
     reportedTo: 'Harbour security; the police',
     policeReference: 'DEMO-2026-0412',
@@ -80,6 +83,7 @@ export const DEMO_INCIDENTS: DemoIncident[] = [
     artifacts: [],
     compartments: ['3-96-0-E'],
     close: [],
+    publicNote: '',
     severity: 'moderate',
     reportedTo: 'Duty engineer',
     policeReference: '',

@@ -85,6 +85,7 @@ export async function seedDemoCondition(dataSource: DataSource, config: Config):
         artifactIds: await Promise.all(demo.artifacts.map(artifactId)),
         compartmentIds: demo.compartments.map((d) => rooms.get(d)!),
         closeCompartmentIds: demo.close.map((d) => rooms.get(d)!),
+        publicNote: demo.publicNote,
         severity: demo.severity,
       },
       curator,
