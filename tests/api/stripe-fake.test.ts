@@ -344,6 +344,13 @@ describe('errors in Stripe’s shape', () => {
     expect(((await none.json()) as { error: { type: string } }).error.type).toBe('invalid_request_error');
   });
 
+  it('answers a malformed URL with 400 and keeps serving', async () => {
+    expect((await fetch(`${fake.baseUrl}/pay/%E0%A4%A`)).status).toBe(400);
+    const res = await fetch(`${fake.baseUrl}/v1/events/%E0%A4%A`, { headers: { authorization: `Bearer ${FAKE_STRIPE_SECRET_KEY}` } });
+    expect(res.status).toBe(400);
+    expect((await stripe.events.list({ limit: 1 })).object).toBe('list');
+  });
+
   it('raises StripeInvalidRequestError naming the param', async () => {
     const cases: Array<[Partial<Stripe.Checkout.SessionCreateParams>, string, string]> = [
       [{ line_items: [{ price_data: { currency: 'usd', product_data: { name: 'x' } }, quantity: 1 }] }, 'line_items[0][price_data][unit_amount]', 'parameter_missing'],

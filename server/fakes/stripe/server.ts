@@ -80,7 +80,13 @@ export class FakeStripeServer {
 
   /** Listens on 127.0.0.1:`port`; if that port is taken, on any free one. */
   async start(port = DEFAULT_STRIPE_FAKE_PORT): Promise<number> {
-    const server = createServer((req, res) => void this.handle(req, res));
+    const server = createServer((req, res) => {
+      this.handle(req, res).catch((err: Error) => {
+        if (res.headersSent) return void res.destroy();
+        const status = err instanceof URIError ? 400 : 500;
+        sendJson(res, status, { error: { type: status === 400 ? 'invalid_request_error' : 'api_error', message: status === 400 ? 'Malformed request URL.' : `The local Stripe fake failed: ${err.message}` } });
+      });
+    });
     const listen = (p: number) => new Promise<void>((resolve, reject) => {
       server.once('error', reject);
       server.listen(p, '127.0.0.1', () => {
