@@ -135,6 +135,7 @@ describe('Checkout Sessions through the real SDK', () => {
   });
 });
 
+// The cards are Stripe's published test cards (https://docs.stripe.com/testing).
 describe('the hosted checkout page', () => {
   it('has the labelled fields, the Pay button, a Cancel link and no external assets', async () => {
     const session = await newSession();
@@ -229,6 +230,7 @@ describe('the hosted checkout page', () => {
   });
 });
 
+// Signature scheme: https://docs.stripe.com/webhooks#verify-manually; verified here by the SDK itself.
 describe('webhook delivery', () => {
   it('signs each event so that stripe.webhooks.constructEvent verifies it, and refuses a tampered body', async () => {
     const session = await paidSession();
@@ -355,8 +357,10 @@ describe('errors in Stripe’s shape', () => {
     const cases: Array<[Partial<Stripe.Checkout.SessionCreateParams>, string, string]> = [
       [{ line_items: [{ price_data: { currency: 'usd', product_data: { name: 'x' } }, quantity: 1 }] }, 'line_items[0][price_data][unit_amount]', 'parameter_missing'],
       [{ line_items: [{ price_data: { currency: 'usd', unit_amount: 100, product_data: { name: 'x' } }, quantity: 0 }] }, 'line_items[0][quantity]', 'parameter_invalid_integer'],
+      // Stripe's minimum charge, 0.50 USD: https://docs.stripe.com/currencies#minimum-and-maximum-charge-amounts
       [{ line_items: [{ price_data: { currency: 'usd', unit_amount: 10, product_data: { name: 'x' } }, quantity: 1 }] }, 'line_items', 'amount_too_small'],
       [{ success_url: 'javascript:alert(1)' }, 'success_url', 'url_invalid'],
+      // expires_at from 30 minutes to 24 hours ahead: Stripe API reference, Checkout Session create
       [{ expires_at: Math.floor(Date.now() / 1000) + 60 }, 'expires_at', 'parameter_invalid_integer'],
       [{ customer_email: 'not-an-address' }, 'customer_email', 'email_invalid'],
       [{ mode: 'subscription' }, 'mode', 'parameter_invalid_string'],

@@ -11,7 +11,10 @@ export interface WebhookOptions {
   timeoutMs: number;
 }
 
-/** The `Stripe-Signature` header as Stripe builds it: HMAC-SHA256 of `${t}.${payload}` with the endpoint secret. */
+/**
+ * The `Stripe-Signature` header as Stripe builds it: HMAC-SHA256 of `${t}.${payload}` with the
+ * endpoint secret, hex (https://docs.stripe.com/webhooks#verify-manually).
+ */
 export function signatureHeader(payload: string, secret: string, timestamp = Math.floor(Date.now() / 1000)): string {
   const v1 = createHmac('sha256', secret).update(`${timestamp}.${payload}`, 'utf8').digest('hex');
   return `t=${timestamp},v1=${v1}`;
@@ -19,7 +22,8 @@ export function signatureHeader(payload: string, secret: string, timestamp = Mat
 
 /**
  * Posts each event to the endpoint, signed, and tries again with exponential backoff while the
- * endpoint does not answer 2xx, up to `maxAttempts`. Every attempt is recorded in the store.
+ * endpoint does not answer 2xx, up to `maxAttempts` (Stripe itself retries for up to three days,
+ * https://docs.stripe.com/webhooks#retries). Each attempt is signed afresh and recorded in the store.
  */
 export class WebhookDispatcher {
   private readonly timers = new Set<NodeJS.Timeout>();
