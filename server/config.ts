@@ -12,6 +12,15 @@ export interface MailConfig {
   from: string;
 }
 
+export interface StripeConfig {
+  /** A real Stripe secret key; when empty the SDK talks to the local fake of the Stripe API. */
+  secretKey: string | null;
+  /** The endpoint's signing secret; with the fake, its fixed one when unset. */
+  webhookSecret: string | null;
+  /** Port for the local Stripe fake (any free port if taken). */
+  fakePort: number;
+}
+
 export interface Config {
   env: 'development' | 'production' | 'test';
   port: number;
@@ -35,6 +44,7 @@ export interface Config {
   mail: MailConfig;
   /** Port for the local fake mail server (0 picks a free one). */
   fakeMailPort: number;
+  stripe: StripeConfig;
   clientDir: string;
   seedOnStart: boolean;
   /** Largest deck plan accepted, in bytes and in pixels a side. */
@@ -112,6 +122,11 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
       from: env.MAIL_FROM ?? 'Shipkeeper <no-reply@shipkeeper.test>',
     },
     fakeMailPort: int(env.FAKE_SMTP_PORT, 2525, 'FAKE_SMTP_PORT'),
+    stripe: {
+      secretKey: env.STRIPE_SECRET_KEY || null,
+      webhookSecret: env.STRIPE_WEBHOOK_SECRET || null,
+      fakePort: int(env.STRIPE_FAKE_PORT, 12111, 'STRIPE_FAKE_PORT'),
+    },
     clientDir: path.resolve(env.CLIENT_DIR ?? './dist'),
     seedOnStart: bool(env.SEED_ON_START, nodeEnv !== 'production'),
     planMaxBytes: int(env.PLAN_MAX_MB, 300, 'PLAN_MAX_MB') * 1024 * 1024,
