@@ -1,4 +1,4 @@
-import type { CreateIncidentBody, Incident, IncidentsQuery, UpdateIncidentBody } from '@shared/schemas/incidents';
+import type { Closure, CreateIncidentBody, Incident, IncidentsQuery, UpdateIncidentBody } from '@shared/schemas/incidents';
 import type { CreateRiskBody, DeckConditionOverlay, Risk, RisksQuery, UpdateRiskBody } from '@shared/schemas/risks';
 import type { ConditionReport, ConditionReportsQuery, CreateConditionReportBody, CreateFindingBody, UpdateConditionReportBody, UpdateFindingBody } from '@shared/schemas/condition';
 import type { Page } from '@shared/schemas/common';
@@ -20,6 +20,7 @@ export const removeFinding = (reportId: number, findingId: number) => api.delete
 
 export const listIncidents = (params: Partial<IncidentsQuery> & { vesselId: number }) => api.get<Page<Incident>>('/incidents', params);
 export const getIncident = (id: number) => api.get<Incident>(`/incidents/${id}`);
+export const listClosures = (vesselId: number) => api.get<Closure[]>(`/vessels/${vesselId}/closures`);
 export const createIncident = (body: CreateIncidentBody) => api.post<Incident>('/incidents', body);
 export const updateIncident = (id: number, body: UpdateIncidentBody) => api.patch<Incident>(`/incidents/${id}`, body);
 
