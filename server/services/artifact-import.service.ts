@@ -1,4 +1,5 @@
 import { readFile, unlink } from 'node:fs/promises';
+import { setImmediate } from 'node:timers/promises';
 import Papa from 'papaparse';
 import { ARTIFACT_CSV_COLUMNS, type ImportMode, type ImportResult } from '../../shared/schemas/artifact-import.js';
 import type { ArtifactFilters } from '../../shared/schemas/artifacts.js';
@@ -10,6 +11,7 @@ import type { Actor } from './audit.service.js';
 import type { UploadedFile } from './plan.service.js';
 
 const IMPORT_JOB = jobUrl(import.meta.url, 'artifact-import.job');
+const EXPORT_BATCH = 50;
 
 /**
  * CSV import of artifacts in two steps (a preview that writes nothing, then all rows or only the
@@ -43,7 +45,8 @@ export class ArtifactImportService {
     const columns = ARTIFACT_CSV_COLUMNS.map((c) => c.name);
     // escapeFormulae: a cell starting with = + - @ is prefixed with ' so spreadsheets do not run it.
     write(Papa.unparse([columns], { newline: '\r\n' }) + '\r\n');
-    for await (const batch of this.store.repos.artifacts.all(vesselId, filters)) {
+    // Short slices: each batch is synchronous SQLite work, so the loop is let go between them.
+    for await (const batch of this.store.repos.artifacts.all(vesselId, filters, EXPORT_BATCH)) {
       const rows = batch.map((a) => [
         a.objectNumber,
         a.name,
@@ -62,6 +65,7 @@ export class ArtifactImportService {
         a.compartment?.deck?.name ?? '',
       ]);
       write(Papa.unparse(rows, { escapeFormulae: true, newline: '\r\n' }) + '\r\n');
+      await setImmediate();
     }
   }
 }

@@ -126,4 +126,34 @@ describe('CSV import on a worker thread', () => {
     expect(order).toEqual(['public', 'import']);
     expect((await counts()).artifacts).toBe(5000);
   });
+
+  it('answers a public request while a 5,000-row export runs (the export works in short slices)', async () => {
+    expect((await importCsv('all', bigCsv(5000))).body).toMatchObject({ imported: 5000 });
+    const order: string[] = [];
+    let firstChunk!: () => void;
+    const writing = new Promise<void>((resolve) => (firstChunk = resolve));
+    const exporting = curator.agent
+      .get(`/api/v1/vessels/${vesselId}/artifacts/export`)
+      .buffer(true)
+      .parse((res, done) => {
+        let text = '';
+        res.setEncoding('utf8');
+        res.on('data', (chunk: string) => {
+          if (!text) firstChunk();
+          text += chunk;
+        });
+        res.on('end', () => done(null, text));
+      })
+      .then((res) => (order.push('export'), res));
+    await writing;
+    const visitor = request(ctx.app)
+      .get('/api/v1/visit/site')
+      .then((res) => (order.push('public'), res));
+    const [exported, visit] = await Promise.all([exporting, visitor]);
+
+    expect(visit.status).toBe(200);
+    expect(exported.status).toBe(200);
+    expect((exported.body as string).trim().split('\r\n')).toHaveLength(5001);
+    expect(order).toEqual(['public', 'export']);
+  });
 });
