@@ -13,7 +13,7 @@ import { hashPassword } from '../../server/auth/password-hash.js';
 import { openDatabase } from '../../server/db/data-source.js';
 import { ArtifactEntity } from '../../server/db/entities/artifact.entity.js';
 import { SearchIndex } from '../../server/search/search-index.js';
-import { searchDocumentOf } from '../../server/services/artifact.service.js';
+import { searchDocumentOf } from '../../server/services/artifact-record.js';
 import { makeDerivatives } from '../../server/services/media-derivatives.js';
 import { BENCH_EMAIL, BENCH_PASSWORD, signIn, startServer, time } from './http-bench.js';
 

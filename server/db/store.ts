@@ -68,6 +68,19 @@ export class Store {
     this.repos = repositories(dataSource.manager);
   }
 
+  /** The database file, for a job on a worker thread that opens a connection of its own. */
+  get databasePath(): string {
+    return this.dataSource.options.database as string;
+  }
+
+  /**
+   * Runs work that writes through a connection of its own (a job on a worker thread) while no
+   * other change of the app runs: it holds the same lock as transaction().
+   */
+  exclusive<T>(work: () => Promise<T>): Promise<T> {
+    return writeLock(this.dataSource).run(work);
+  }
+
   /** Runs a change in one transaction, one at a time; nothing but database work may wait inside it. */
   transaction<T>(work: (repos: Repositories) => Promise<T>): Promise<T> {
     return writeLock(this.dataSource).run(() => this.dataSource.transaction((manager) => work(repositories(manager))));

@@ -6,7 +6,7 @@ import type { CompartmentEntity } from '../db/entities/compartment.entity.js';
 import { mediaUrl } from './media.presenter.js';
 
 /** How a place is written in the location history. */
-export function compartmentLabel(compartment: CompartmentEntity | null): string | null {
+export function compartmentLabel(compartment: Pick<CompartmentEntity, 'designation' | 'name'> | null): string | null {
   return compartment ? `${compartment.designation} ${compartment.name}` : null;
 }
 

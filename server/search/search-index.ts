@@ -55,7 +55,7 @@ export function hitOf(row: RawHit): SearchHit {
   return { id: Number(row.id), title: mergeHighlights(row.hl_title), snippet: mergeHighlights(row.hl_snippet) };
 }
 
-function scopeOf(kind: SearchKind, vesselId: number): string {
+export function scopeOf(kind: SearchKind, vesselId: number): string {
   return `${kind}${vesselId}`;
 }
 

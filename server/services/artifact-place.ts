@@ -10,8 +10,7 @@ import { UnprocessableError } from '../http/errors.js';
  */
 export async function checkPlace(repos: Repositories, vesselId: number, compartmentId: number | null, point: Point | null, status: ArtifactStatus): Promise<CompartmentEntity | null> {
   if (compartmentId === null) {
-    if (point) throw new UnprocessableError('A point on the plan needs a compartment.', { compartmentId: 'Choose the compartment the point is in.' });
-    if (status === 'in-place') throw new UnprocessableError('An artifact in place is aboard: choose its compartment.', { compartmentId: 'Choose a compartment, or another status.' });
+    checkUnplaced(point, status);
     return null;
   }
   const compartment = await repos.compartments.findById(compartmentId);
@@ -31,4 +30,10 @@ export async function checkPlace(repos: Repositories, vesselId: number, compartm
     });
   }
   return compartment;
+}
+
+/** The rule for an artifact in no compartment: no point, and not in place (the CSV import checks it row by row). */
+export function checkUnplaced(point: Point | null, status: ArtifactStatus): void {
+  if (point) throw new UnprocessableError('A point on the plan needs a compartment.', { compartmentId: 'Choose the compartment the point is in.' });
+  if (status === 'in-place') throw new UnprocessableError('An artifact in place is aboard: choose its compartment.', { compartmentId: 'Choose a compartment, or another status.' });
 }

@@ -1,6 +1,6 @@
 import { daysAgo, latestPastDay } from '../../shared/calc/days.js';
 import { checkObjectNumber, objectNumberSortKey } from '../../shared/calc/object-number.js';
-import { CATEGORY_LABELS, type ArtifactsQuery, type UpdateArtifactBody, type archiveArtifactBody, type createArtifactBody, type moveArtifactBody } from '../../shared/schemas/artifacts.js';
+import { type ArtifactsQuery, type UpdateArtifactBody, type archiveArtifactBody, type createArtifactBody, type moveArtifactBody } from '../../shared/schemas/artifacts.js';
 import type { z } from 'zod';
 import type { ArtifactEntity } from '../db/entities/artifact.entity.js';
 import type { CompartmentEntity } from '../db/entities/compartment.entity.js';
@@ -8,40 +8,14 @@ import type { Repositories, Store } from '../db/store.js';
 import { ConflictError, NotFoundError, UnprocessableError } from '../http/errors.js';
 import { compartmentLabel, presentArtifact, presentMarker, presentMove } from '../presenters/artifact.presenter.js';
 import { reindexReportsOf } from '../search/condition-report-document.js';
-import type { SearchDocument } from '../search/search-index.js';
 import { checkPlace } from './artifact-place.js';
+import { DESCRIBING, recordedAudit, searchDocumentOf } from './artifact-record.js';
 import { changesBetween, recordAudit, type Actor } from './audit.service.js';
 import { staleEditError } from './stale-edit.js';
 
 export type CreateArtifactInput = z.output<typeof createArtifactBody>;
 
-const DESCRIBING: (keyof ArtifactEntity & keyof CreateArtifactInput)[] = [
-  'objectNumber',
-  'name',
-  'category',
-  'description',
-  'dateOrPeriod',
-  'maker',
-  'materials',
-  'height',
-  'width',
-  'depth',
-  'dimensionUnit',
-  'significance',
-];
 const PLACE: (keyof ArtifactEntity)[] = ['status', 'compartmentId', 'point', 'deaccessionReason'];
-
-export function searchDocumentOf(artifact: ArtifactEntity): SearchDocument {
-  return {
-    kind: 'artifact',
-    recordId: artifact.id,
-    vesselId: artifact.vesselId,
-    number: artifact.objectNumber,
-    title: artifact.name,
-    body: [artifact.description, artifact.significance].filter(Boolean).join('\n'),
-    extra: [artifact.materials, artifact.maker, artifact.dateOrPeriod, CATEGORY_LABELS[artifact.category]].filter(Boolean).join(' · '),
-  };
-}
 
 /** The date of a move: today when not given; never after tomorrow (UTC), whatever the time zone. */
 function moveDate(movedOn: string | undefined): string {
@@ -98,8 +72,7 @@ export async function insertArtifact(repos: Repositories, vesselId: number, inpu
     entityType: 'artifact',
     entityId: artifact.id,
     vesselId,
-    summary: `Artifact ${objectNumber} (${artifact.name}) recorded`,
-    changes: changesBetween({} as ArtifactEntity, artifact, [...DESCRIBING, 'status', 'compartmentId', 'point']),
+    ...recordedAudit(artifact),
   });
   return artifact;
 }
@@ -174,7 +147,7 @@ export class ArtifactService {
       if (fields.objectNumber !== undefined && fields.objectNumber.trim().toUpperCase() !== artifact.objectNumber) {
         fields.objectNumber = await checkNumber(repos, artifact.vesselId, fields.objectNumber, id);
       } else delete fields.objectNumber;
-      const changes = changesBetween(artifact, fields, DESCRIBING);
+      const changes = changesBetween(artifact, fields, [...DESCRIBING]);
       if (!changes) return;
       Object.assign(artifact, fields);
       artifact.objectNumberSort = objectNumberSortKey(artifact.objectNumber);

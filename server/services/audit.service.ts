@@ -1,6 +1,6 @@
 import type { Request } from 'express';
 import type { AuditAction, AuditEventsQuery } from '../../shared/schemas/audit.js';
-import type { AuditChanges } from '../db/entities/audit-event.entity.js';
+import type { AuditChanges, AuditEventEntity } from '../db/entities/audit-event.entity.js';
 import type { Repositories, Store } from '../db/store.js';
 import { presentAuditEvent } from '../presenters/audit-event.presenter.js';
 
@@ -23,9 +23,11 @@ export interface AuditEntry {
   changes?: AuditChanges | null;
 }
 
-/** Writes one audit event with the repositories of the change's own transaction. */
-export function recordAudit(repos: Repositories, actor: Actor, entry: AuditEntry) {
-  return repos.auditEvents.add({
+export type AuditRow = Omit<AuditEventEntity, 'id' | 'actor'>;
+
+/** The row of one audit event (also written in bulk by the CSV import). */
+export function auditRowOf(actor: Actor, entry: AuditEntry): AuditRow {
+  return {
     at: new Date(),
     actorId: actor.id,
     action: entry.action,
@@ -35,7 +37,12 @@ export function recordAudit(repos: Repositories, actor: Actor, entry: AuditEntry
     summary: entry.summary.slice(0, 300),
     changes: entry.changes ?? null,
     ipAddress: actor.ip,
-  });
+  };
+}
+
+/** Writes one audit event with the repositories of the change's own transaction. */
+export function recordAudit(repos: Repositories, actor: Actor, entry: AuditEntry) {
+  return repos.auditEvents.add(auditRowOf(actor, entry));
 }
 
 /** The fields whose values differ between two versions of a record. */

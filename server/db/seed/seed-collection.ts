@@ -6,7 +6,7 @@ import { pointInPolygon, type Point } from '../../../shared/calc/geometry.js';
 import { objectNumberSortKey } from '../../../shared/calc/object-number.js';
 import type { Config } from '../../config.js';
 import { compartmentLabel } from '../../presenters/artifact.presenter.js';
-import { searchDocumentOf } from '../../services/artifact.service.js';
+import { searchDocumentOf } from '../../services/artifact-record.js';
 import { MediaService } from '../../services/media.service.js';
 import { FileStore } from '../../storage/file-store.js';
 import type { CompartmentEntity } from '../entities/compartment.entity.js';
