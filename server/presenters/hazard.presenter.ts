@@ -11,6 +11,7 @@ export function presentHazard(hazard: HazardEntity, viewer: Express.User): Hazar
     lastVerifiedOn: hazard.lastVerifiedOn,
     verifiedBy: hazard.verifiedBy ? { id: hazard.verifiedBy.id, name: hazard.verifiedBy.name } : null,
     updatedAt: hazard.updatedAt.toISOString(),
+    version: hazard.version,
     abilities: { update: can(viewer.role, 'hazard', 'update'), delete: can(viewer.role, 'hazard', 'delete') },
   };
 }

@@ -44,7 +44,7 @@ export function hazardRoutes(api: ApiRouter, hazards: HazardService) {
     params: hazardParams,
     body: updateHazardBody,
     response: hazard,
-    errors: [404],
+    errors: [404, 409],
     handler: ({ req, params, body }) => hazards.update(params.id, params.hazardId, body, req.user!, actorOf(req)),
   });
 

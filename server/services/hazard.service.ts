@@ -2,10 +2,11 @@ import { HAZARD_LABELS, type UpdateHazardBody } from '../../shared/schemas/hazar
 import type { createHazardBody } from '../../shared/schemas/hazards.js';
 import type { z } from 'zod';
 import type { HazardEntity } from '../db/entities/hazard.entity.js';
-import type { Store } from '../db/store.js';
+import type { Repositories, Store } from '../db/store.js';
 import { NotFoundError } from '../http/errors.js';
 import { presentHazard } from '../presenters/hazard.presenter.js';
 import { changesBetween, recordAudit, type Actor } from './audit.service.js';
+import { staleEditError } from './stale-edit.js';
 
 /** The hazard register of a compartment. The product records and reminds; it never declares a space safe. */
 export class HazardService {
@@ -17,8 +18,8 @@ export class HazardService {
     return compartment;
   }
 
-  private async hazardOf(compartmentId: number, hazardId: number) {
-    const hazard = await this.store.repos.hazards.findPlain(hazardId);
+  private async hazardOf(repos: Repositories, compartmentId: number, hazardId: number) {
+    const hazard = await repos.hazards.findPlain(hazardId);
     if (!hazard || hazard.compartmentId !== compartmentId) throw new NotFoundError('The hazard');
     return hazard;
   }
@@ -47,10 +48,12 @@ export class HazardService {
   async update(compartmentId: number, hazardId: number, body: UpdateHazardBody, viewer: Express.User, actor: Actor) {
     const compartment = await this.compartmentOrFail(compartmentId);
     await this.store.transaction(async (repos) => {
-      const hazard = await this.hazardOf(compartmentId, hazardId);
-      const changes = changesBetween<HazardEntity>(hazard, body, ['kind', 'notes', 'lastVerifiedOn']);
+      const hazard = await this.hazardOf(repos, compartmentId, hazardId);
+      if (hazard.version !== body.version) throw await staleEditError(repos, 'hazard', hazardId, 'this hazard', hazard.version, body.version);
+      const { version: _version, ...fields } = body;
+      const changes = changesBetween<HazardEntity>(hazard, fields, ['kind', 'notes', 'lastVerifiedOn']);
       if (!changes) return;
-      Object.assign(hazard, body);
+      Object.assign(hazard, fields);
       if (changes.lastVerifiedOn) hazard.verifiedById = hazard.lastVerifiedOn ? viewer.id : null;
       await repos.hazards.save(hazard);
       await recordAudit(repos, actor, {
@@ -67,8 +70,8 @@ export class HazardService {
 
   async remove(compartmentId: number, hazardId: number, actor: Actor) {
     const compartment = await this.compartmentOrFail(compartmentId);
-    const hazard = await this.hazardOf(compartmentId, hazardId);
     await this.store.transaction(async (repos) => {
+      const hazard = await this.hazardOf(repos, compartmentId, hazardId);
       await repos.hazards.remove(hazardId);
       await recordAudit(repos, actor, {
         action: 'delete',

@@ -30,6 +30,7 @@ export const hazard = z
     lastVerifiedOn: z.string().nullable(),
     verifiedBy: z.object({ id: z.number().int(), name: z.string() }).nullable(),
     updatedAt: z.string(),
+    version: z.number().int(),
     abilities: z.object({ update: z.boolean(), delete: z.boolean() }),
   })
   .meta({ id: 'Hazard' });
@@ -51,7 +52,11 @@ export const createHazardBody = z
   .meta({ id: 'CreateHazardBody' });
 export type CreateHazardBody = z.input<typeof createHazardBody>;
 
-export const updateHazardBody = z.object(hazardFields).partial().meta({ id: 'UpdateHazardBody' });
+export const updateHazardBody = z
+  .object({ ...hazardFields, version: z.number().int().min(1) })
+  .partial()
+  .required({ version: true })
+  .meta({ id: 'UpdateHazardBody' });
 export type UpdateHazardBody = z.infer<typeof updateHazardBody>;
 
 export const hazardParams = z.object({ id: z.coerce.number().int().positive(), hazardId: z.coerce.number().int().positive() });

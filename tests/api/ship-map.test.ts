@@ -243,6 +243,6 @@ describe('hazards', () => {
     const one = (await curator.post(`/api/v1/vessels/${vesselId}/compartments`, { deckId: deck.id, designation: '1-10-0-L', name: 'A' })).body;
     const two = (await curator.post(`/api/v1/vessels/${vesselId}/compartments`, { deckId: deck.id, designation: '1-20-0-L', name: 'B' })).body;
     const hazard = (await conservator.post(`/api/v1/compartments/${one.id}/hazards`, { kind: 'steep-ladder' })).body;
-    expect((await conservator.patch(`/api/v1/compartments/${two.id}/hazards/${hazard.id}`, { notes: 'x' })).status).toBe(404);
+    expect((await conservator.patch(`/api/v1/compartments/${two.id}/hazards/${hazard.id}`, { notes: 'x', version: hazard.version })).status).toBe(404);
   });
 });

@@ -1,4 +1,4 @@
-import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
+import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, VersionColumn, type Relation } from 'typeorm';
 import type { HazardKind } from '../../../shared/schemas/hazards.js';
 import { CompartmentEntity } from './compartment.entity.js';
 import { UserEntity } from './user.entity.js';
@@ -38,4 +38,7 @@ export class HazardEntity {
 
   @UpdateDateColumn({ type: 'datetime' })
   updatedAt: Date;
+
+  @VersionColumn({ type: 'integer' })
+  version: number;
 }

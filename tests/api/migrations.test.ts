@@ -1,0 +1,47 @@
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { DataSource } from 'typeorm';
+import { afterEach, describe, expect, it } from 'vitest';
+import { HazardVersions1796284659278 } from '../../server/db/migrations/1796284659278-HazardVersions.js';
+import { migrations } from '../../server/db/migrations/index.js';
+import { signedInAs } from '../support/http.js';
+import { createTestApp, type TestApp } from '../support/test-app.js';
+
+let ctx: TestApp | undefined;
+afterEach(() => ctx?.close());
+
+/** A database migrated up to (not including) `migration`, with `seed` run against it. */
+async function databaseBefore(migration: (typeof migrations)[number], seed: (db: DataSource) => Promise<void>) {
+  const dataDir = mkdtempSync(path.join(tmpdir(), 'shipkeeper-migration-'));
+  const db = new DataSource({ type: 'better-sqlite3', database: path.join(dataDir, 'shipkeeper.sqlite'), migrations: migrations.slice(0, migrations.indexOf(migration)), migrationsTransactionMode: 'each' });
+  await db.initialize();
+  await db.runMigrations();
+  await seed(db);
+  await db.destroy();
+  return dataDir;
+}
+
+describe('migrations', () => {
+  it('HazardVersions keeps every hazard and starts it at version 1, so the next edit on version 1 lands', async () => {
+    const dataDir = await databaseBefore(HazardVersions1796284659278, async (db) => {
+      expect((await db.query(`PRAGMA table_info("hazards")`)).map((c: { name: string }) => c.name)).not.toContain('version');
+      await db.query(`INSERT INTO "users" ("id", "email", "name", "role", "version") VALUES (7, 'checker@example.test', 'Checker', 'conservator', 1)`);
+      await db.query(`INSERT INTO "vessels" ("id", "name", "vesselType", "version") VALUES (1, 'SS Test Migration', 'Steamship', 1)`);
+      await db.query(`INSERT INTO "decks" ("id", "vesselId", "name", "position", "version") VALUES (1, 1, 'Fourth deck', 0, 1)`);
+      await db.query(`INSERT INTO "compartments" ("id", "vesselId", "deckId", "designation", "designationKey", "name", "version") VALUES (3, 1, 1, 'Feed tank', 'FEED TANK', 'Feed water tank', 1)`);
+      await db.query(`INSERT INTO "hazards" ("id", "compartmentId", "kind", "notes", "lastVerifiedOn", "verifiedById") VALUES (5, 3, 'confined-space', 'Single manhole', '2026-01-15', 7)`);
+    });
+
+    ctx = await createTestApp({}, { dataDir, mail: false });
+    const [row] = await ctx.dataSource.query(`SELECT "id", "compartmentId", "kind", "notes", "lastVerifiedOn", "verifiedById", "version" FROM "hazards"`);
+    expect(row).toEqual({ id: 5, compartmentId: 3, kind: 'confined-space', notes: 'Single manhole', lastVerifiedOn: '2026-01-15', verifiedById: 7, version: 1 });
+
+    const { client } = await signedInAs(ctx.app, ctx.store, 'conservator');
+    expect((await client.get('/api/v1/compartments/3/hazards')).body[0]).toMatchObject({ id: 5, version: 1, verifiedBy: { id: 7, name: 'Checker' } });
+    const edited = await client.patch('/api/v1/compartments/3/hazards/5', { notes: 'Single manhole, no ventilation', version: 1 });
+    expect(edited.status).toBe(200);
+    expect(edited.body.version).toBe(2);
+    expect((await client.patch('/api/v1/compartments/3/hazards/5', { kind: 'asbestos', version: 1 })).status).toBe(409);
+  });
+});
