@@ -7,6 +7,7 @@ import { seedDemoCollection } from './db/seed/seed-collection.js';
 import { seedDemoCondition } from './db/seed/seed-condition.js';
 import { DEMO_PASSWORD, DEMO_USERS } from './db/seed/demo-data.js';
 import { FakeMailServer } from './fakes/mail-server.js';
+import { FakeStripeServer } from './fakes/stripe/server.js';
 
 const config = loadConfig();
 if (config.secureCookies && !config.trustProxy) {
@@ -23,6 +24,14 @@ if (!config.mail.host) {
     await fakeMail.start(0); // the usual port is taken: any free one will do, the app knows which
   }
   console.log(`Local fake mail server on 127.0.0.1:${fakeMail.port} (no SMTP_HOST set); messages appear in the Outbox.`);
+}
+
+let fakeStripe: FakeStripeServer | null = null;
+if (!config.stripe.secretKey) {
+  // Webhooks are delivered once the app has its endpoint for them (the giving work); until then none is set.
+  fakeStripe = new FakeStripeServer();
+  const port = await fakeStripe.start(config.stripe.fakePort);
+  console.log(`Local fake of the Stripe API on 127.0.0.1:${port} (no STRIPE_SECRET_KEY set); test key sk_test_shipkeeper_local.`);
 }
 
 if (config.seedOnStart && (await seedDemo(dataSource, { bcryptCost: config.bcryptCost }))) {
@@ -45,6 +54,7 @@ async function shutdown() {
   server.close();
   shipkeeper.close();
   await fakeMail?.stop();
+  await fakeStripe?.stop();
   await dataSource.destroy();
   process.exit(0);
 }
