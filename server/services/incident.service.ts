@@ -1,5 +1,5 @@
-import type { Agent, DamageType } from '../../shared/schemas/condition.js';
-import { DEFAULT_CLOSURE_NOTE, INCIDENT_KIND_LABELS, type IncidentKind, type IncidentsQuery, type UpdateIncidentBody, type createIncidentBody } from '../../shared/schemas/incidents.js';
+import { impliedFinding, linesAbout } from '../../shared/calc/incident-finding.js';
+import { DEFAULT_CLOSURE_NOTE, INCIDENT_KIND_LABELS, type IncidentsQuery, type UpdateIncidentBody, type createIncidentBody } from '../../shared/schemas/incidents.js';
 import type { Incident } from '../../shared/schemas/incidents.js';
 import type { z } from 'zod';
 import type { IncidentSubjectEntity } from '../db/entities/incident-subject.entity.js';
@@ -14,14 +14,6 @@ import type { ConditionReportService } from './condition-report.service.js';
 import { staleEditError } from './stale-edit.js';
 
 /** The finding an incident writes on each item it affected. */
-const FINDING_OF: Record<IncidentKind, { agent: Agent; damageType: DamageType }> = {
-  vandalism: { agent: 'thieves-and-vandals', damageType: 'impact-damage' },
-  theft: { agent: 'thieves-and-vandals', damageType: 'missing-part' },
-  'water-ingress': { agent: 'water', damageType: 'water-staining' },
-  fire: { agent: 'fire', damageType: 'scorching-or-soot' },
-  accident: { agent: 'physical-forces', damageType: 'impact-damage' },
-  other: { agent: 'physical-forces', damageType: 'other' },
-};
 
 /** Found on: not after tomorrow (UTC, whatever the time zone); it happened on or before it was found. */
 function checkDates(foundOn: string, occurredOn: string | null) {
@@ -95,6 +87,16 @@ export class IncidentService {
     }
   }
 
+  private async artifactNames(repos: Repositories, id: number): Promise<string[]> {
+    const artifact = await repos.artifacts.findById(id);
+    return artifact ? [artifact.objectNumber, artifact.name] : [];
+  }
+
+  private async compartmentNames(repos: Repositories, id: number): Promise<string[]> {
+    const compartment = await repos.compartments.findById(id);
+    return compartment ? [compartment.designation, compartment.name] : [];
+  }
+
   async create(body: z.output<typeof createIncidentBody>, viewer: Express.User, actor: Actor) {
     const artifactIds = [...new Set(body.artifactIds)];
     const compartmentIds = [...new Set(body.compartmentIds)];
@@ -110,9 +112,12 @@ export class IncidentService {
       const publicNote = fields.publicNote || (closing.length ? DEFAULT_CLOSURE_NOTE : '');
       const incident = await repos.incidents.create({ ...fields, publicNote, closedCompartmentIds: [], reportIds: [], loggedById: viewer.id });
       const reportIds: number[] = [];
-      const finding = { ...FINDING_OF[body.kind], severity, description: `${INCIDENT_KIND_LABELS[body.kind]} (incident ${incident.id}): ${body.title}. ${body.description}`.trim() };
       for (const [type, ids] of [['artifact', artifactIds], ['compartment', compartmentIds]] as const) {
         for (const id of ids) {
+          // each item's finding takes the lines of the text that name it, and the damage they imply
+          const names = type === 'artifact' ? await this.artifactNames(repos, id) : await this.compartmentNames(repos, id);
+          const about = linesAbout(body.description, names) ?? body.description;
+          const finding = { ...impliedFinding(body.kind, `${body.title}. ${about}`), severity, description: `${INCIDENT_KIND_LABELS[body.kind]} (incident ${incident.id}): ${body.title}. ${about}`.trim() };
           await repos.incidents.link(incident.id, type, id);
           // a docent's incident opens drafts with no surveyor: a conservator completes them
           const surveyorId = can(viewer.role, 'conditionReport', 'create') ? viewer.id : null;

@@ -200,3 +200,21 @@ describe("today's closures", () => {
     expect((await curator.get(`/api/v1/vessels/${vesselId}/closures`)).body).toMatchObject([{ since: '2026-11-30', incidentId: again.body.id }]);
   });
 });
+
+describe('the findings an incident opens', () => {
+  it('give each affected item its own line of the text and the damage it implies', async () => {
+    const res = await conservator.post('/api/v1/incidents', {
+      vesselId,
+      kind: 'vandalism',
+      title: 'Damage in the magazine',
+      foundOn: '2026-11-29',
+      description: 'The steam gauge glass was smashed. Graffiti sprayed on the magazine bulkhead.',
+      artifactIds: [gaugeId],
+      compartmentIds: [place.second],
+    });
+    expect(res.status).toBe(201);
+    const [onGauge, onRoom] = await Promise.all(res.body.reportIds.map(async (id: number) => (await conservator.get(`/api/v1/condition-reports/${id}`)).body.findings[0]));
+    expect(onGauge).toMatchObject({ agent: 'thieves-and-vandals', damageType: 'broken-glass-or-dial', description: expect.stringMatching(/The steam gauge glass was smashed\.$/) });
+    expect(onRoom).toMatchObject({ agent: 'thieves-and-vandals', damageType: 'graffiti', description: expect.stringMatching(/Graffiti sprayed on the magazine bulkhead\.$/) });
+  });
+});
