@@ -61,10 +61,14 @@ export const DAMAGE_TYPE_KEYS = Object.keys(DAMAGE_TYPES) as [DamageType, ...Dam
 /** Damage types for which the surveyor gives percent rusted and its distribution (coatings on steel). */
 export const RUST_DAMAGE_TYPES: readonly DamageType[] = ['coating-failure'];
 
-export const METHODS = ['visual', 'close-visual', 'ultrasonic-thickness', 'other'] as const;
-export const METHOD_LABELS: Record<(typeof METHODS)[number], string> = {
+export const METHODS = ['visual', 'close-visual', 'raking-light', 'uv-fluorescence', 'magnification', 'ultrasonic-thickness', 'other'] as const;
+export type SurveyMethod = (typeof METHODS)[number];
+export const METHOD_LABELS: Record<SurveyMethod, string> = {
   visual: 'Visual',
   'close-visual': 'Close visual',
+  'raking-light': 'Raking light',
+  'uv-fluorescence': 'UV fluorescence',
+  magnification: 'Magnification (loupe or microscope)',
   'ultrasonic-thickness': 'Ultrasonic thickness',
   other: 'Other',
 };

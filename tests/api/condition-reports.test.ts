@@ -287,3 +287,14 @@ describe('hazards where the work is written', () => {
     expect(flat).toContain('Caution: This action would disturb the lead-based paint recorded here.');
   });
 });
+
+describe('survey methods', () => {
+  it('include raking light, UV fluorescence and magnification', async () => {
+    for (const method of ['raking-light', 'uv-fluorescence', 'magnification']) {
+      const res = await conservator.post('/api/v1/condition-reports', { subjectType: 'compartment', subjectId: place.first, inspectedOn: '2026-11-20', method });
+      expect(res.status, method).toBe(201);
+      expect(res.body.method).toBe(method);
+    }
+    expect((await conservator.post('/api/v1/condition-reports', { subjectType: 'compartment', subjectId: place.first, inspectedOn: '2026-11-20', method: 'x-ray' })).status).toBe(400);
+  });
+});

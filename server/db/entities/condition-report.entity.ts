@@ -1,3 +1,4 @@
+import type { SurveyMethod } from '../../../shared/schemas/condition.js';
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, VersionColumn, type Relation } from 'typeorm';
 import type { ConditionGrade } from '../../../shared/calc/condition-grade.js';
 import type { ReportSubject } from '../../../shared/schemas/condition.js';
@@ -54,7 +55,7 @@ export class ConditionReportEntity {
   surveyor: Relation<UserEntity> | null;
 
   @Column({ type: 'varchar', length: 30, default: 'visual' })
-  method: 'visual' | 'close-visual' | 'ultrasonic-thickness' | 'other';
+  method: SurveyMethod;
 
   @Column({ type: 'real', nullable: true })
   temperatureC: number | null;
