@@ -1,4 +1,5 @@
 import { ROLE_LABELS, type Role } from '../../shared/roles.js';
+import { mailDateTime } from './dates.js';
 import type { OutgoingMail } from './mailer.js';
 
 function escapeHtml(value: string): string {
@@ -17,7 +18,7 @@ function layout(title: string, paragraphs: string[], action: { label: string; ur
 
 export function invitationMail(input: { to: string; name: string; role: Role; organisationName: string; invitedBy: string; url: string; expiresAt: Date }): OutgoingMail {
   const subject = `You are invited to ${input.organisationName} on Shipkeeper`;
-  const expires = input.expiresAt.toUTCString();
+  const expires = mailDateTime(input.expiresAt);
   const paragraphs = [
     `Hello ${input.name},`,
     `${input.invitedBy} has invited you to join ${input.organisationName} on Shipkeeper as ${ROLE_LABELS[input.role].toLowerCase()}.`,
@@ -37,7 +38,7 @@ export function passwordResetMail(input: { to: string; name: string; url: string
   const paragraphs = [
     `Hello ${input.name},`,
     'Someone asked to reset the password of your Shipkeeper account. If it was you, choose a new password with the link below.',
-    `The link works once and expires on ${input.expiresAt.toUTCString()}.`,
+    `The link works once and expires on ${mailDateTime(input.expiresAt)}.`,
   ];
   const footer = 'If you did not ask for this, ignore this message: your password stays as it is.';
   return {

@@ -12,6 +12,7 @@ import { changesBetween, recordAudit, type Actor } from './audit.service.js';
 import type { ConditionAlerts } from './condition-alerts.js';
 import type { ConditionReportService } from './condition-report.service.js';
 import { staleEditError } from './stale-edit.js';
+import { mailDate } from '../mail/dates.js';
 
 /** The finding an incident writes on each item it affected. */
 
@@ -157,7 +158,7 @@ export class IncidentService {
     await this.alerts.tellKeepers(
       `${INCIDENT_KIND_LABELS[presented.kind]}: ${presented.title}`,
       [
-        `${viewer.name} logged an incident found on ${presented.foundOn}${presented.occurredOn ? ` (it happened on ${presented.occurredOn})` : ''}: ${presented.title}.`,
+        `${viewer.name} logged an incident found on ${mailDate(presented.foundOn)}${presented.occurredOn ? ` (it happened on ${mailDate(presented.occurredOn)})` : ''}: ${presented.title}.`,
         affected.length ? `Affected: ${affected.join('; ')}.` : 'No artifact or compartment is named yet.',
         ...(presented.closedCompartmentIds.length ? [`Closed to visitors: ${presented.compartments.filter((c) => presented.closedCompartmentIds.includes(c.id)).map((c) => c.label).join('; ')}.`] : []),
         ...(body.severity === 'critical' ? ['The damage is recorded as critical.'] : []),

@@ -61,6 +61,7 @@ describe('incidents', () => {
       expect(mail.subject).toBe('Vandalism: Gauge glass smashed in the magazine');
       expect(mail.text).toContain('Closed to visitors: 1-40-2-M Magazine.');
       expect(mail.text).toContain('Police reference: PR-2026-1187.');
+      expect(mail.text).toContain('found on Sunday 29 November 2026 (it happened on Saturday 28 November 2026)');
     }
     expect(ctx.fakeMail.list().some((m) => m.to.includes('gone-curator@example.test'))).toBe(false);
     const byArtifact = (await curator.get(`/api/v1/incidents?vesselId=${vesselId}&artifactId=${gaugeId}`)).body;

@@ -24,6 +24,7 @@ describe('invitations', () => {
     expect(res.body).toMatchObject({ email: 'new.docent@example.test', role: 'docent', status: 'pending', sentCount: 1 });
     const mail = await waitForMail(ctx!.fakeMail, 'new.docent@example.test');
     expect(mail.subject).toMatch(/invited/);
+    expect(mail.text).toMatch(/expires on (Monday|Tuesday|Wednesday|Thursday|Friday|Saturday|Sunday) \d{1,2} [A-Z][a-z]+ \d{4}, \d{2}:\d{2} UTC\./);
     const token = tokenFromMail(mail.text, '/invitation');
 
     const visitor = new Client(ctx!.app);
