@@ -146,6 +146,9 @@ describe('photos of an incident', () => {
     const incident = (await curator.post('/api/v1/incidents', { vesselId, kind: 'vandalism', title: 'Paint thrown', foundOn: '2026-11-29' })).body;
     const res = await conservator.agent.post(`/api/v1/media?ownerType=incident&ownerId=${incident.id}`).set('x-csrf-token', conservator.csrf).attach('file', await cameraJpeg(), 'scene.jpg');
     expect(res.status).toBe(201);
+    // incident photos are staff evidence: alt text never makes them publishable
+    const described = await conservator.patch(`/api/v1/media/${res.body.id}`, { altText: 'Paint on the bulkhead', version: res.body.version });
+    expect(described.body.publishable).toBe(false);
     const docent = (await signedInAs(ctx.app, ctx.store, 'docent')).client;
     expect((await docent.agent.post(`/api/v1/media?ownerType=incident&ownerId=${incident.id}`).set('x-csrf-token', docent.csrf).attach('file', await cameraJpeg(), 'x.jpg')).status).toBe(201);
     const fundraiser = (await signedInAs(ctx.app, ctx.store, 'fundraiser')).client;
