@@ -1,6 +1,7 @@
 import { readFile } from 'node:fs/promises';
 import PDFDocument from 'pdfkit';
 import sharp from 'sharp';
+import { PDF_FONTS, printable as plain } from './pdf-fonts.js';
 import { GRADE_LABELS, RULE_TEXT, SEVERITY_LABELS, gradeFromFindings } from '../../shared/calc/condition-grade.js';
 import { RUST_DISTRIBUTION_LABELS, rustGradeRange, rustGrade } from '../../shared/calc/rust-grade.js';
 import { AGENT_LABELS, DAMAGE_TYPES, METHOD_LABELS, URGENCY_LABELS } from '../../shared/schemas/condition.js';
@@ -28,14 +29,9 @@ export interface ReportPdfInput {
   hazards: readonly HazardKind[];
 }
 
-/** The standard PDF fonts know Windows-1252 only; anything else is written plainly. */
-function plain(text: string): string {
-  return text
-    .replace(/[→]/g, '->')
-    .replace(/[−]/g, '-')
-    .replace(/[≤]/g, '<=')
-    .replace(/[≥]/g, '>=')
-    .replace(/[^\u0000-\u00ff\u2013\u2014\u2018\u2019\u201c\u201d\u2026\u20ac]/g, '?');
+/** The fontkit font behind the current pdfkit font (pdfkit does not type it). */
+function glyphsOf(doc: PDFKit.PDFDocument): { hasGlyphForCodePoint(codePoint: number): boolean } {
+  return (doc as unknown as { _font: { font: { hasGlyphForCodePoint(codePoint: number): boolean } } })._font.font;
 }
 
 const INK = '#1d2a36';
@@ -45,21 +41,28 @@ const RULE = '#c9c2b2';
 /** A condition report as a PDF for a grant maker or an insurer: the record, its findings and photos. */
 export async function conditionReportPdf(input: ReportPdfInput): Promise<Buffer> {
   const { report, findings } = input;
-  const doc = new PDFDocument({ size: 'A4', margin: 56, info: { Title: plain(`Condition report ${report.id}: ${input.subjectLabel}`), Author: plain(input.organisationName), Creator: 'Shipkeeper' } });
+  const doc = new PDFDocument({ size: 'A4', margin: 56, font: PDF_FONTS.body, info: { Title: plain(`Condition report ${report.id}: ${input.subjectLabel}`), Author: plain(input.organisationName), Creator: 'Shipkeeper' } });
   const chunks: Buffer[] = [];
   doc.on('data', (chunk: Buffer) => chunks.push(chunk));
   const finished = new Promise<Buffer>((resolve, reject) => {
     doc.on('end', () => resolve(Buffer.concat(chunks)));
     doc.on('error', reject);
   });
+  doc.registerFont('Body', PDF_FONTS.body);
+  doc.registerFont('Bold', PDF_FONTS.bodyBold);
+  doc.registerFont('Heading', PDF_FONTS.heading);
+  const headingGlyphs = glyphsOf(doc.font('Heading'));
+  /** Merriweather where it has every character of the text, else the bold sans. */
+  const headingFont = (text: string) => ([...text].every((c) => /\s/.test(c) || headingGlyphs.hasGlyphForCodePoint(c.codePointAt(0)!)) ? 'Heading' : 'Bold');
   const width = doc.page.width - 112;
-  const heading = (text: string) => doc.moveDown(0.8).font('Helvetica-Bold').fontSize(12).fillColor(INK).text(plain(text)).moveDown(0.3);
-  const field = (label: string, value: string) => doc.font('Helvetica-Bold').fontSize(9.5).fillColor(INK).text(`${plain(label)}: `, { continued: true }).font('Helvetica').text(plain(value));
+  const heading = (text: string) => doc.moveDown(0.8).font(headingFont(plain(text))).fontSize(12).fillColor(INK).text(plain(text)).moveDown(0.3);
+  const field = (label: string, value: string) => doc.font('Bold').fontSize(9.5).fillColor(INK).text(`${plain(label)}: `, { continued: true }).font('Body').text(plain(value));
   const line = () => doc.moveDown(0.4).strokeColor(RULE).lineWidth(0.5).moveTo(56, doc.y).lineTo(56 + width, doc.y).stroke().moveDown(0.4);
 
-  doc.font('Helvetica').fontSize(9).fillColor(MUTED).text(plain(`${input.organisationName} · ${input.vesselName}`));
-  doc.moveDown(0.3).font('Helvetica-Bold').fontSize(18).fillColor(INK).text(plain(`Condition report: ${input.subjectLabel}`));
-  doc.font('Helvetica').fontSize(10).fillColor(MUTED).text(plain(`Report ${report.id}, revision ${report.revision}${report.supersedesId ? `, amending report ${report.supersedesId}` : ''}`));
+  doc.font('Body').fontSize(9).fillColor(MUTED).text(plain(`${input.organisationName} · ${input.vesselName}`));
+  const title = plain(`Condition report: ${input.subjectLabel}`);
+  doc.moveDown(0.3).font(headingFont(title)).fontSize(18).fillColor(INK).text(title);
+  doc.font('Body').fontSize(10).fillColor(MUTED).text(plain(`Report ${report.id}, revision ${report.revision}${report.supersedesId ? `, amending report ${report.supersedesId}` : ''}`));
   if (input.supersededById) doc.fillColor('#8a3b12').text(plain(`Superseded by report ${input.supersededById}; this revision is kept for the record.`));
   line();
 
@@ -73,28 +76,28 @@ export async function conditionReportPdf(input: ReportPdfInput): Promise<Buffer>
   if (input.hazards.length) {
     heading('Hazards recorded here');
     for (const kind of input.hazards) {
-      doc.font('Helvetica-Bold').fontSize(9.5).fillColor('#8a3b12').text(plain(`${HAZARD_LABELS[kind]}: `), { continued: true }).font('Helvetica').fillColor(INK).text(plain(HAZARD_CAUTIONS[kind]), { width });
+      doc.font('Bold').fontSize(9.5).fillColor('#8a3b12').text(plain(`${HAZARD_LABELS[kind]}: `), { continued: true }).font('Body').fillColor(INK).text(plain(HAZARD_CAUTIONS[kind]), { width });
     }
   }
 
   heading(`Overall condition: ${GRADE_LABELS[report.grade]}`);
   const rule = gradeFromFindings(findings);
-  doc.font('Helvetica').fontSize(9.5).fillColor(INK).text(plain(`By the rule: ${GRADE_LABELS[rule.grade]} (${rule.because})`));
+  doc.font('Body').fontSize(9.5).fillColor(INK).text(plain(`By the rule: ${GRADE_LABELS[rule.grade]} (${rule.because})`));
   if (report.gradeOverride) doc.text(plain(`Set by the surveyor to ${GRADE_LABELS[report.gradeOverride]}: ${report.overrideReason ?? ''}`));
   doc.moveDown(0.2).fontSize(8.5).fillColor(MUTED);
   for (const text of RULE_TEXT) doc.text(plain(`• ${text}`), { indent: 8 });
 
   if (report.summary) {
     heading('Summary');
-    doc.font('Helvetica').fontSize(10).fillColor(INK).text(plain(report.summary), { width });
+    doc.font('Body').fontSize(10).fillColor(INK).text(plain(report.summary), { width });
   }
 
   heading(`Findings (${findings.length})`);
-  if (findings.length === 0) doc.font('Helvetica').fontSize(10).fillColor(MUTED).text('No findings recorded.');
+  if (findings.length === 0) doc.font('Body').fontSize(10).fillColor(MUTED).text('No findings recorded.');
   findings.forEach((f, i) => {
     if (doc.y > doc.page.height - 160) doc.addPage();
-    doc.font('Helvetica-Bold').fontSize(10.5).fillColor(INK).text(plain(`${i + 1}. ${DAMAGE_TYPES[f.damageType].label}: ${SEVERITY_LABELS[f.severity]}`));
-    doc.font('Helvetica').fontSize(9.5);
+    doc.font('Bold').fontSize(10.5).fillColor(INK).text(plain(`${i + 1}. ${DAMAGE_TYPES[f.damageType].label}: ${SEVERITY_LABELS[f.severity]}`));
+    doc.font('Body').fontSize(9.5);
     field('Agent of deterioration', AGENT_LABELS[f.agent]);
     if (f.artifact) field('Artifact', `${f.artifact.objectNumber} ${f.artifact.name}`);
     if (f.extentPercent !== null) field('Extent', `${f.extentPercent} % of the surface or object`);
@@ -116,11 +119,11 @@ export async function conditionReportPdf(input: ReportPdfInput): Promise<Buffer>
       const jpeg = await sharp(await readFile(photo.file)).resize({ width: 1000, height: 700, fit: 'inside', withoutEnlargement: true }).jpeg({ quality: 80 }).toBuffer();
       if (doc.y > doc.page.height - 300) doc.addPage();
       doc.image(jpeg, { fit: [width, 240] });
-      doc.moveDown(0.2).font('Helvetica').fontSize(8.5).fillColor(MUTED).text(plain(photo.caption), { width }).moveDown(0.6);
+      doc.moveDown(0.2).font('Body').fontSize(8.5).fillColor(MUTED).text(plain(photo.caption), { width }).moveDown(0.6);
     }
   }
 
-  doc.moveDown(1).font('Helvetica').fontSize(8).fillColor(MUTED).text(plain(`Made with Shipkeeper on ${new Date().toISOString().slice(0, 10)}. Hazards noted in a report do not declare a space safe; entry follows the site safety plan.`), { width });
+  doc.moveDown(1).font('Body').fontSize(8).fillColor(MUTED).text(plain(`Made with Shipkeeper on ${new Date().toISOString().slice(0, 10)}. Hazards noted in a report do not declare a space safe; entry follows the site safety plan.`), { width });
   doc.end();
   return finished;
 }

@@ -111,7 +111,9 @@ export class ConditionReportService {
       const media = await repos.media.findById(mediaId);
       if (!media || media.kind !== 'photo') continue;
       const marked = findings.map((f, i) => (f.location?.on === 'photo' && f.location.mediaId === mediaId ? i + 1 : null)).filter((n) => n !== null);
-      const caption = [media.caption || media.fileName, media.credit && `Photo: ${media.credit}`, media.takenAt && `taken ${media.takenAt.replace('T', ' ')}`, marked.length ? `finding ${marked.join(', ')}` : null].filter(Boolean).join(' · ');
+      // A file name is a camera's counter, not a description: an uncaptioned photo is named by its place and date.
+      const date = media.takenAt ? `taken ${media.takenAt.replace('T', ' ')}` : media.caption ? null : `added ${media.createdAt.toISOString().slice(0, 10)}`;
+      const caption = [media.caption || `Photo ${photos.length + 1}`, media.credit && `Photo: ${media.credit}`, date, marked.length ? `finding ${marked.join(', ')}` : null].filter(Boolean).join(' · ');
       photos.push({ file: derivativeFile(this.files.path(media.storageKey), 'display'), caption });
     }
     const pdf = await conditionReportPdf({

@@ -215,6 +215,50 @@ describe('the report as a PDF', () => {
   });
 });
 
+describe('the PDF in embedded fonts', () => {
+  const text = 'Müller’s gauge • 5 °C ± 0.5, 20 µm, Žilina, Łódź, → done';
+
+  it('prints accents, bullets and signs as written, and names a photo without a caption by its place and date', async () => {
+    const { cameraJpeg } = await import('../support/images.js');
+    const { extractText, getDocumentProxy } = await import('unpdf');
+    const accented = (await addArtifact(curator, vesselId, { objectNumber: '2019.4.14', name: 'Jauge à vapeur, Łódź série', compartmentId: place.first, point: [210, 210] })).id;
+    const report = (await conservator.post('/api/v1/condition-reports', { subjectType: 'artifact', subjectId: accented, inspectedOn: '2026-11-20', method: 'close-visual', summary: text })).body;
+    await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { agent: 'water', damageType: 'water-staining', severity: 'slight', description: text, artifactId: accented });
+    const upload = async (name: string) => (await conservator.agent.post(`/api/v1/media?ownerType=condition-report&ownerId=${report.id}`).set('x-csrf-token', conservator.csrf).attach('file', await cameraJpeg(), name)).body;
+    const captioned = await upload('IMG_0001.jpg');
+    await conservator.patch(`/api/v1/media/${captioned.id}`, { caption: 'Dial face, Žilina side', version: captioned.version });
+    await upload('IMG_0002.jpg');
+
+    const res = await curator.get(`/api/v1/condition-reports/${report.id}/pdf`).buffer(true).parse((r, done) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (c: Buffer) => chunks.push(c));
+      r.on('end', () => done(null, Buffer.concat(chunks)));
+    });
+    expect(res.status).toBe(200);
+    const bytes = res.body as Buffer;
+    const { text: extracted } = await extractText(await getDocumentProxy(new Uint8Array(bytes)), { mergePages: true });
+    // pdf.js hands text back in compatibility form (NFKC), so the micro sign µ reads back as the Greek μ.
+    const flat = extracted.replace(/\s+/g, ' ');
+    const written = text.normalize('NFKC');
+    expect(written).not.toBe(text);
+    expect(flat).toContain('Condition report: 2019.4.14 Jauge à vapeur, Łódź série');
+    expect(flat).toContain(`Summary ${written}`);
+    expect(flat).toContain(`Observed: ${written}`);
+    expect(flat).toContain('Artifact: 2019.4.14 Jauge à vapeur, Łódź série');
+    expect(flat).not.toContain('?');
+    expect(flat).toContain('Dial face, Žilina side');
+    expect(flat).toContain('Photo 2 · taken 2024-05-17 14:03:22');
+    expect(flat).not.toContain('IMG_000');
+    // Fonts are embedded (a TrueType font file each), not the standard ones.
+    const raw = bytes.toString('latin1');
+    expect(raw).toContain('/FontFile2');
+    expect(raw).toMatch(/\/BaseFont \/[A-Z]{6}\+DejaVuSans\b/);
+    expect(raw).toMatch(/\/BaseFont \/[A-Z]{6}\+DejaVuSans-Bold/);
+    expect(raw).toMatch(/\/BaseFont \/[A-Z]{6}\+Merriweather/);
+    expect(raw).not.toContain('/Helvetica');
+  });
+});
+
 describe('deleting a draft', () => {
   it('takes its photos and their files with it', async () => {
     const { cameraJpeg } = await import('../support/images.js');
