@@ -10,11 +10,11 @@ export const ROLE_LABELS: Record<Role, string> = {
 };
 
 export const ROLE_SUMMARIES: Record<Role, string> = {
-  admin: 'People, roles, organisation settings and the audit trail.',
-  curator: 'The ship map, the collection, tours and repair projects.',
-  conservator: 'Condition reports, incidents, treatments and hazards.',
-  docent: 'Writes tours and stops for review.',
-  fundraiser: 'Repair appeals, donations and receipts.',
+  admin: 'People, roles, organisation settings, backups and the audit trail.',
+  curator: 'The ship map, the collection and the risk register; logs incidents and closes spaces.',
+  conservator: 'Condition reports, incidents, hazards and the risk register.',
+  docent: 'Reads the ship map and the collection, and logs the incidents they find, with photos.',
+  fundraiser: 'Reads the ship map, the collection and condition summaries.',
 };
 
 export function isRole(value: unknown): value is Role {
