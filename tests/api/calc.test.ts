@@ -56,6 +56,8 @@ describe('GET /api/v1/calc/rust-grade', () => {
 describe('GET /api/v1/calc/abc-risk', () => {
   it('adds the scores into MR and names the band', async () => {
     const res = await new Client(ctx.app).get('/api/v1/calc/abc-risk?a=4&b=3.5&c=2');
+    expect(res.body.source).toMatch(/The ABC Method: a risk management approach to the preservation of cultural heritage/);
+    expect(res.body.source).not.toMatch(/remembered|memory/);
     expect(res.body).toMatchObject({ a: 4, b: 3.5, c: 2, magnitude: 9.5, band: 'high', bandRange: 'MR 9.5–11' });
   });
 
