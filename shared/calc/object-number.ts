@@ -49,6 +49,12 @@ export const PATTERN_PROBLEM_MESSAGES: Record<PatternProblem, string> = {
 
 const isDigit = (c: string | undefined) => c !== undefined && c >= '0' && c <= '9';
 const YEAR = /^(?:1[5-9]\d\d|2\d\d\d)$/;
+/**
+ * A part of an object: a letter or two (2026.3.1a) or further numbered parts, singly or as a range
+ * (2026.3.1.1-2), as registrars number the parts of one object. Each group starts with its own
+ * separator, so the expression cannot backtrack.
+ */
+const PART_SUFFIX = /^(?:[a-z]{1,2}|(?:\.[1-9]\d{0,5}(?:-[1-9]\d{0,5})?)+[a-z]{0,2})$/i;
 /** N is a whole number of 1 to 6 digits without a leading zero. */
 const NUMBER_DIGITS = 6;
 
@@ -66,7 +72,7 @@ export function matchesPattern(value: string, pattern: string): boolean {
     for (let at = 0; at <= value.length; at++) {
       if (!reached[at]) continue;
       if (part.kind === 'literal') {
-        if (value.startsWith(part.text, at)) next[at + part.text.length] = true;
+        if (value.toUpperCase().startsWith(part.text, at)) next[at + part.text.length] = true;
       } else if (part.kind === 'year') {
         if (YEAR.test(value.slice(at, at + 4))) next[at + 4] = true;
       } else if (value[at] !== '0') {
@@ -76,7 +82,7 @@ export function matchesPattern(value: string, pattern: string): boolean {
     if (!next.some(Boolean)) return false;
     reached = next;
   }
-  return reached[value.length] === true;
+  return reached.some((hit, at) => hit && (at === value.length || PART_SUFFIX.test(value.slice(at))));
 }
 
 /** An example number in the pattern, for hints and messages. */
@@ -88,9 +94,9 @@ export function patternExample(pattern: string): string {
 
 export type ObjectNumberCheck = { ok: true; value: string } | { ok: false; message: string };
 
-/** Checks an object number against the pattern; the stored form is trimmed and upper-cased. */
+/** Checks an object number against the pattern (a part suffix allowed); the stored form is trimmed, its case kept as typed. */
 export function checkObjectNumber(input: string, pattern = DEFAULT_OBJECT_NUMBER_PATTERN): ObjectNumberCheck {
-  const value = input.trim().toUpperCase();
+  const value = input.trim();
   if (!value) return { ok: false, message: 'Object number is required.' };
   if (value.length > MAX_OBJECT_NUMBER_LENGTH) return { ok: false, message: `Object number must be at most ${MAX_OBJECT_NUMBER_LENGTH} characters.` };
   if (!matchesPattern(value, pattern)) {

@@ -4,17 +4,27 @@ import { matchExpression, mergeHighlights } from '../../server/search/search-ind
 
 // The three-part year.lot.item number is common practice in museum registration, no published source.
 describe('object numbers', () => {
-  it('accepts year.lot.item by default and stores it trimmed and upper-cased', () => {
+  // part suffixes as registrars write them (common practice, no published source)
+  it.each(['2026.3.1a', '2026.3.1b', '2026.3.1.1-2', '2026.3.1.2', '2026.3.1.1.3', '2026.3.1.2a'])('accepts the part number %j, as typed', (input) => {
+    expect(checkObjectNumber(input)).toEqual({ ok: true, value: input });
+  });
+
+  it.each(['2026.3.1abc', '2026.3.1.0', '2026.3.1.', '2026.3.1-', '2026.3.1..2', '2026.3.1.1-', '2026.3.1 a'])('refuses the malformed part %j', (input) => {
+    expect(checkObjectNumber(input).ok).toBe(false);
+  });
+
+  it('accepts year.lot.item by default and stores it trimmed, its case as typed', () => {
     expect(checkObjectNumber(' 2019.4.12 ')).toEqual({ ok: true, value: '2019.4.12' });
     expect(checkObjectNumber('1923.1.1')).toMatchObject({ ok: true });
   });
 
-  it.each(['2019.4', '2019.4.12.1', '19.4.12', '2019.04.12', '2019-4-12', '2019.4.x', '', '   ', '3019.1.1'])('refuses %j', (input) => {
+  it.each(['2019.4', '19.4.12', '2019.04.12', '2019-4-12', '2019.4.x', '', '   ', '3019.1.1'])('refuses %j', (input) => {
     expect(checkObjectNumber(input).ok).toBe(false);
   });
 
   it('follows another pattern, with letters and separators', () => {
-    expect(checkObjectNumber('sk-2020-7', 'SK-YYYY-N')).toEqual({ ok: true, value: 'SK-2020-7' });
+    expect(checkObjectNumber('sk-2020-7', 'SK-YYYY-N')).toEqual({ ok: true, value: 'sk-2020-7' });
+    expect(checkObjectNumber('SK-2020-7', 'SK-YYYY-N')).toEqual({ ok: true, value: 'SK-2020-7' });
     expect(checkObjectNumber('2020-7', 'SK-YYYY-N').ok).toBe(false);
     expect(checkObjectNumber('12/3', 'N/N')).toMatchObject({ ok: true });
     const refused = checkObjectNumber('2020.7', 'YYYY.N.N');
