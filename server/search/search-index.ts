@@ -6,7 +6,11 @@ import { HIGHLIGHT_END, HIGHLIGHT_START } from '../../shared/schemas/artifacts.j
  * document in it when it is written, inside the same transaction; a list then joins the table by
  * `kind` and `record_id`. Later kinds (condition reports, tour stops) add themselves to SEARCH_KINDS.
  * A document's kind and vessel are also one indexed token (`scope`), so that narrowing a search to
- * them is a lookup in the index rather than a read of every matching row.
+ * them is a lookup in the index rather than a read of every matching row. Its tokenizer is porter
+ * over unicode61 without diacritics (migration SearchStemming): "lamp" finds "lamps", "muller" finds
+ * "Müller". A query's words are stemmed the same way, a typed prefix too, so a prefix longer than the
+ * stem of the word it begins ("conditio" of "condition", stored as "condit") finds nothing until it
+ * is completed.
  */
 export const SEARCH_KINDS = ['artifact', 'condition-report'] as const;
 export type SearchKind = (typeof SEARCH_KINDS)[number];

@@ -177,4 +177,15 @@ describe('artifact list and search', () => {
       expect(res.status, q).toBe(200);
     }
   });
+
+  it('finds word forms (porter stemmer) and accented names, and the last word as a prefix as it is typed', async () => {
+    await addArtifact(curator, vesselId, { objectNumber: '2019.7.1', name: 'Brass oil lamps', description: 'Made by Müller & Sohn, polished.' });
+    await addArtifact(curator, vesselId, { objectNumber: '2019.7.2', name: 'Ship bell', description: 'Cast bronze.' });
+    const found = async (q: string) => (await curator.get(`/api/v1/vessels/${vesselId}/artifacts?q=${encodeURIComponent(q)}`)).body.items.map((a: { objectNumber: string }) => a.objectNumber);
+    // Only the last word is a prefix: "lamp oil" and "polishing" need the stemmer.
+    for (const q of ['lamp', 'lamps', 'lam', 'lamp oil', 'polishing', 'muller', 'Müller', 'brass l']) expect(await found(q), q).toEqual(['2019.7.1']);
+    // Search syntax stays plain words: with OR as an operator these would find the lamps.
+    for (const q of ['lamp" OR x', 'lamp OR bell', 'lamp NEAR(bell', 'title:bell lamp']) expect(await found(q), q).toEqual([]);
+    for (const q of ['*', 'NEAR(', '"lamp']) expect((await curator.get(`/api/v1/vessels/${vesselId}/artifacts?q=${encodeURIComponent(q)}`)).status, q).toBe(200);
+  });
 });

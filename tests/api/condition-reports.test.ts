@@ -147,6 +147,8 @@ describe('condition reports', () => {
     const hit = await curator.get(`/api/v1/condition-reports?vesselId=${vesselId}&q=marker`);
     expect(hit.body.items.map((r: { id: number }) => r.id)).toEqual([report.id]);
     expect((await curator.get(`/api/v1/condition-reports?vesselId=${vesselId}&q=whistle`)).body.total).toBe(0);
+    // Word forms and a prefix as typed (porter stemmer over unicode61).
+    for (const q of ['markers', 'tagging', 'bulkheads', 'bulkh']) expect((await curator.get(`/api/v1/condition-reports?vesselId=${vesselId}&q=${q}`)).body.total, q).toBe(1);
     // The draft can go; its search document goes with it.
     expect((await conservator.send('delete', `/api/v1/condition-reports/${report.id}`)).status).toBe(204);
     expect((await curator.get(`/api/v1/condition-reports?vesselId=${vesselId}&q=marker`)).body.total).toBe(0);

@@ -4,6 +4,7 @@ import path from 'node:path';
 import { DataSource } from 'typeorm';
 import { afterEach, describe, expect, it } from 'vitest';
 import { HazardVersions1796284659278 } from '../../server/db/migrations/1796284659278-HazardVersions.js';
+import { SearchStemming1796285944020 } from '../../server/db/migrations/1796285944020-SearchStemming.js';
 import { migrations } from '../../server/db/migrations/index.js';
 import { signedInAs } from '../support/http.js';
 import { createTestApp, type TestApp } from '../support/test-app.js';
@@ -43,5 +44,28 @@ describe('migrations', () => {
     expect(edited.status).toBe(200);
     expect(edited.body.version).toBe(2);
     expect((await client.patch('/api/v1/compartments/3/hazards/5', { kind: 'asbestos', version: 1 })).status).toBe(409);
+  });
+
+  it('SearchStemming keeps every search document, now found by other forms of its words', async () => {
+    const dataDir = await databaseBefore(SearchStemming1796285944020, async (db) => {
+      await db.query(`INSERT INTO "vessels" ("id", "name", "vesselType", "version") VALUES (1, 'SS Test Migration', 'Steamship', 1)`);
+      await db.query(`INSERT INTO "artifacts" ("id", "vesselId", "objectNumber", "objectNumberSort", "name", "category", "status", "version") VALUES (4, 1, '2019.7.1', '2019.7.1', 'Brass oil lamps', 'tools', 'in-store', 1)`);
+      await db.query(`INSERT INTO "search_documents" (rowid, kind, record_id, vessel_id, scope, number, title, body, extra) VALUES (64, 'artifact', 4, 1, 'artifact1', '2019.7.1', 'Brass oil lamps', 'Made by Müller, polished', '')`);
+      // Before: the unstemmed index does not take "lamp" for "lamps".
+      expect(await db.query(`SELECT record_id FROM "search_documents" WHERE "search_documents" MATCH '"lamp"'`)).toEqual([]);
+    });
+
+    ctx = await createTestApp({}, { dataDir, mail: false });
+    const { client } = await signedInAs(ctx.app, ctx.store, 'curator');
+    for (const q of ['lamp oil', 'polishing', 'lam', 'muller']) {
+      expect((await client.get(`/api/v1/vessels/1/artifacts?q=${encodeURIComponent(q)}`)).body.items.map((a: { id: number }) => a.id), q).toEqual([4]);
+    }
+    const [row] = await ctx.dataSource.query(`SELECT rowid, kind, record_id, vessel_id, scope, number FROM "search_documents"`);
+    expect(row).toEqual({ rowid: 64, kind: 'artifact', record_id: 4, vessel_id: 1, scope: 'artifact1', number: '2019.7.1' });
+
+    // And down() puts the unstemmed table back with its documents.
+    await new SearchStemming1796285944020().down(ctx.dataSource.createQueryRunner());
+    expect(await ctx.dataSource.query(`SELECT record_id FROM "search_documents" WHERE "search_documents" MATCH '"lamp"'`)).toEqual([]);
+    expect(await ctx.dataSource.query(`SELECT record_id FROM "search_documents" WHERE "search_documents" MATCH '"lamps"'`)).toEqual([{ record_id: 4 }]);
   });
 });
