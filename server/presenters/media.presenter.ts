@@ -1,5 +1,5 @@
 import { can, MEDIA_OWNERS } from '../../shared/permissions.js';
-import { PUBLIC_OWNER_TYPES, type Media, type MediaOwnerType } from '../../shared/schemas/media.js';
+import type { Media, MediaOwnerType } from '../../shared/schemas/media.js';
 import type { MediaEntity } from '../db/entities/media.entity.js';
 
 export function mediaUrl(id: number, variant: 'thumb' | 'display' | 'original'): string {
@@ -32,7 +32,8 @@ export function presentMedia(media: MediaEntity, viewer: Express.User, locked = 
     credit: media.credit,
     altText: media.altText,
     rights: media.rights,
-    publishable: photo && PUBLIC_OWNER_TYPES.includes(media.ownerType) && media.altText.trim().length > 0,
+    publicUse: media.publicUse,
+    publishable: photo && media.publicUse && media.altText.trim().length > 0,
     urls: { thumb: photo ? mediaUrl(media.id, 'thumb') : null, display: photo ? mediaUrl(media.id, 'display') : null, original: mediaUrl(media.id, 'original') },
     uploadedBy: media.uploadedBy ? { id: media.uploadedBy.id, name: media.uploadedBy.name } : null,
     createdAt: media.createdAt.toISOString(),

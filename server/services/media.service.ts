@@ -138,6 +138,7 @@ export class MediaService {
           caption: '',
           credit: '',
           altText: '',
+          publicUse: false,
           rights: '',
           uploadedById: viewer.id,
         });
@@ -170,7 +171,7 @@ export class MediaService {
         throw await staleEditError(repos, 'media', id, 'this file’s details', media.version, body.version);
       }
       const { version: _version, ...fields } = body;
-      const changes = changesBetween(media, fields, ['caption', 'credit', 'altText', 'rights']);
+      const changes = changesBetween(media, fields, ['caption', 'credit', 'altText', 'rights', 'publicUse']);
       if (!changes) return;
       Object.assign(media, fields);
       await repos.media.save(media);

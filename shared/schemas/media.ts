@@ -3,9 +3,6 @@ import { freeText, line } from './text.js';
 
 export const MEDIA_OWNER_TYPES = ['artifact', 'compartment', 'condition-report', 'incident'] as const;
 export type MediaOwnerType = (typeof MEDIA_OWNER_TYPES)[number];
-/** Owners whose photos a public page may show (with alt text); incident and condition photos are staff evidence. */
-export const PUBLIC_OWNER_TYPES: readonly MediaOwnerType[] = ['artifact', 'compartment'];
-
 
 export const MEDIA_KINDS = ['photo', 'document'] as const;
 export type MediaKind = (typeof MEDIA_KINDS)[number];
@@ -38,7 +35,9 @@ export const media = z
     credit: z.string(),
     altText: z.string(),
     rights: z.string(),
-    /** Whether a public page may use it: a photo of an artifact or a compartment, with alt text. */
+    /** Marked by the staff for public pages and summaries. */
+    publicUse: z.boolean(),
+    /** Whether a public page or a summary may show it: a photo marked for public use, with alt text. */
     publishable: z.boolean(),
     urls: z.object({ thumb: z.string().nullable(), display: z.string().nullable(), original: z.string() }),
     uploadedBy: z.object({ id: z.number().int(), name: z.string() }).nullable(),
@@ -62,6 +61,7 @@ export const updateMediaBody = z
     credit: line(200, 'Credit'),
     altText: freeText(300, 'Alt text'),
     rights: freeText(500, 'Rights note'),
+    publicUse: z.boolean({ error: 'Say whether public pages may show it (true or false).' }),
     version: z.number().int().min(1),
   })
   .partial()

@@ -76,8 +76,15 @@ describe('photos', () => {
 
   it('requires alt text before a photo counts as publishable, and answers a stale edit with 409', async () => {
     const photo = (await uploadTo(curator, artifactId, await cameraJpeg(), 'a.jpg')).body;
-    const edited = await curator.patch(`/api/v1/media/${photo.id}`, { caption: 'Gauge on the boiler front', altText: 'Round brass pressure gauge', credit: 'Museum staff', version: photo.version });
-    expect(edited.body).toMatchObject({ publishable: true, caption: 'Gauge on the boiler front' });
+    const described = await curator.patch(`/api/v1/media/${photo.id}`, { caption: 'Gauge on the boiler front', altText: 'Round brass pressure gauge', credit: 'Museum staff', version: photo.version });
+    // alt text alone publishes nothing: a person marks the photo for public use
+    expect(described.body).toMatchObject({ publishable: false, publicUse: false, caption: 'Gauge on the boiler front' });
+    const marked = await curator.patch(`/api/v1/media/${photo.id}`, { publicUse: true, version: described.body.version });
+    expect(marked.body).toMatchObject({ publishable: true, publicUse: true });
+    const unlabelled = await curator.patch(`/api/v1/media/${photo.id}`, { altText: '', version: marked.body.version });
+    expect(unlabelled.body).toMatchObject({ publishable: false, publicUse: true });
+    const edited = { body: { version: unlabelled.body.version } };
+    expect(edited.body.version).toBeGreaterThan(photo.version);
     const stale = await curator.patch(`/api/v1/media/${photo.id}`, { rights: 'CC BY 4.0', version: photo.version });
     expect(stale.status).toBe(409);
     expect(stale.body.error.fields.caption).toBeDefined();

@@ -5,6 +5,7 @@ import { DataSource } from 'typeorm';
 import { afterEach, describe, expect, it } from 'vitest';
 import { HazardVersions1796284659278 } from '../../server/db/migrations/1796284659278-HazardVersions.js';
 import { SearchStemming1796285944020 } from '../../server/db/migrations/1796285944020-SearchStemming.js';
+import { MediaPublicUse1796286347768 } from '../../server/db/migrations/1796286347768-MediaPublicUse.js';
 import { migrations } from '../../server/db/migrations/index.js';
 import { signedInAs } from '../support/http.js';
 import { createTestApp, type TestApp } from '../support/test-app.js';
@@ -24,6 +25,22 @@ async function databaseBefore(migration: (typeof migrations)[number], seed: (db:
 }
 
 describe('migrations', () => {
+  it('MediaPublicUse keeps publishable the photos that were (an artifact’s or compartment’s, with alt text), and no others', async () => {
+    const dataDir = await databaseBefore(MediaPublicUse1796286347768, async (db) => {
+      await db.query(`INSERT INTO "vessels" ("id", "name", "vesselType", "version") VALUES (1, 'SS Test Migration', 'Steamship', 1)`);
+      const row = (id: number, ownerType: string, kind: string, altText: string) =>
+        db.query(`INSERT INTO "media" ("id", "vesselId", "ownerType", "ownerId", "kind", "mimeType", "fileName", "byteSize", "sha256", "storageKey", "altText", "version") VALUES (?, 1, ?, 1, ?, 'image/jpeg', 'a.jpg', 1, 'x', ?, ?, 1)`, [id, ownerType, kind, `k${id}`, altText]);
+      await row(1, 'artifact', 'photo', 'A brass gauge');
+      await row(2, 'artifact', 'photo', '');
+      await row(3, 'incident', 'photo', 'Paint on the bulkhead');
+      await row(4, 'compartment', 'document', 'A plan');
+    });
+    ctx = await createTestApp({}, { dataDir, mail: false });
+    const rows = await ctx.dataSource.query(`SELECT "id", "publicUse" FROM "media" ORDER BY "id"`);
+    expect(rows.map((r: { publicUse: number }) => Number(r.publicUse))).toEqual([1, 0, 0, 0]);
+  });
+
+
   it('HazardVersions keeps every hazard and starts it at version 1, so the next edit on version 1 lands', async () => {
     const dataDir = await databaseBefore(HazardVersions1796284659278, async (db) => {
       expect((await db.query(`PRAGMA table_info("hazards")`)).map((c: { name: string }) => c.name)).not.toContain('version');

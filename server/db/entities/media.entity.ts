@@ -66,6 +66,10 @@ export class MediaEntity {
   @Column({ type: 'varchar', length: 300, default: '' })
   altText: string;
 
+  /** Marked by the staff for public pages and summaries; it is shown there only with alt text. */
+  @Column({ type: 'boolean', default: false })
+  publicUse: boolean;
+
   @Column({ type: 'varchar', length: 500, default: '' })
   rights: string;
 

@@ -107,7 +107,7 @@ export async function seedDemoCollection(dataSource: DataSource, config: Config)
     const uploaded = await media.upload({ ownerType: 'artifact', ownerId: photo.artifactId }, { path: file, originalname: `${photo.name.toLowerCase().replace(/[^a-z0-9]+/g, '-')}.jpg`, size: jpeg.length }, viewer, { id: curator.id, ip: null });
     const row = (await store.repos.media.findById(uploaded.id))!;
     // Every other photo has its alt text, so the demo shows both states.
-    Object.assign(row, { caption: `${photo.name}, as recorded on board`, credit: 'Demo drawing', rights: 'Demo content, no rights reserved', altText: photo.seed % 2 ? `Drawing standing in for a photograph of the ${photo.name.toLowerCase()}` : '' });
+    Object.assign(row, { caption: `${photo.name}, as recorded on board`, credit: 'Demo drawing', rights: 'Demo content, no rights reserved', altText: photo.seed % 2 ? `Drawing standing in for a photograph of the ${photo.name.toLowerCase()}` : '', publicUse: true });
     await store.repos.media.save(row);
   }
 }
