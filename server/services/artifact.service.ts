@@ -1,4 +1,5 @@
 import { daysAgo, latestPastDay } from '../../shared/calc/days.js';
+import { interiorPoint, type Point } from '../../shared/calc/geometry.js';
 import { checkObjectNumber, objectNumberSortKey } from '../../shared/calc/object-number.js';
 import { type ArtifactsQuery, type UpdateArtifactBody, type archiveArtifactBody, type createArtifactBody, type moveArtifactBody } from '../../shared/schemas/artifacts.js';
 import type { z } from 'zod';
@@ -24,6 +25,18 @@ function moveDate(movedOn: string | undefined): string {
     throw new UnprocessableError('A move cannot be dated in the future.', { movedOn: 'This date is in the future.' });
   }
   return movedOn;
+}
+
+/**
+ * The point kept when a move gives none: in another compartment, a point inside its outline (its
+ * centre) so that it stays on the plan until placed; none within the same compartment, as asked.
+ */
+function pointIn(compartment: CompartmentEntity | null, artifact: ArtifactEntity): Point | null {
+  if (!compartment) return null;
+  if (compartment.id === artifact.compartmentId) return null;
+  const deck = compartment.deck;
+  if (!compartment.outline || compartment.outline.length < 3 || deck.planWidth === null || deck.planHeight === null) return null;
+  return interiorPoint(compartment.outline);
 }
 
 /** Checks an object number against the organisation's pattern and the vessel's other numbers. */
@@ -171,17 +184,25 @@ export class ArtifactService {
       const artifact = await this.loadForChange(repos, id, body.version);
       if (artifact.status === 'deaccessioned') throw new UnprocessableError('This artifact has been deaccessioned; its place no longer changes.');
       const compartment = await checkPlace(repos, artifact.vesselId, body.compartmentId, body.point, body.status);
-      const next = { status: body.status, compartmentId: body.compartmentId, point: body.point };
+      const next = { status: body.status, compartmentId: body.compartmentId, point: body.point ?? pointIn(compartment, artifact) };
       const changes = changesBetween(artifact, next, ['status', 'compartmentId', 'point']);
       if (!changes) throw new UnprocessableError('That is where the artifact already is, with the same status.', { compartmentId: 'Unchanged.' });
+      // Putting an artifact on the plan in the compartment it is recorded in adds what was missing; nothing moved.
+      const placement = artifact.compartmentId !== null && artifact.point === null && next.compartmentId === artifact.compartmentId && body.point !== null && next.status === artifact.status;
+      if (!placement && !body.reason) throw new UnprocessableError('Give the reason for the move.', { reason: 'Reason is required.' });
+      const reason = body.reason ?? '';
       const placeChanged = 'compartmentId' in changes || 'point' in changes;
-      await this.recordMove(repos, artifact, placeChanged ? 'moved' : 'status', next, compartment, body.reason, moveDate(body.movedOn), actor);
+      const kind = placement ? 'placed' : placeChanged ? 'moved' : 'status';
+      await this.recordMove(repos, artifact, kind, next, compartment, reason, moveDate(body.movedOn), actor);
+      const where = compartmentLabel(compartment) ?? 'off the ship';
       await recordAudit(repos, actor, {
         action: 'move',
         entityType: 'artifact',
         entityId: id,
         vesselId: artifact.vesselId,
-        summary: `Artifact ${artifact.objectNumber} ${placeChanged ? `moved to ${compartmentLabel(compartment) ?? 'off the ship'}` : `now ${body.status}`}: ${body.reason}`,
+        summary: placement
+          ? `Artifact ${artifact.objectNumber} placed on the plan in ${where}${reason ? `: ${reason}` : ''}`
+          : `Artifact ${artifact.objectNumber} ${placeChanged ? `moved to ${where}` : `now ${body.status}`}: ${reason}`,
         changes,
       });
     });
@@ -211,7 +232,7 @@ export class ArtifactService {
   private async recordMove(
     repos: Repositories,
     artifact: ArtifactEntity,
-    kind: 'moved' | 'status' | 'deaccessioned',
+    kind: 'placed' | 'moved' | 'status' | 'deaccessioned',
     next: Pick<ArtifactEntity, 'status' | 'compartmentId' | 'point'>,
     compartment: CompartmentEntity | null,
     reason: string,

@@ -118,3 +118,30 @@ export function pointInPolygon([px, py]: Point, polygon: readonly Point[]): bool
   }
   return inside;
 }
+
+/**
+ * A point inside a simple polygon: its centroid when that lies inside, else (an L- or U-shaped
+ * outline) the middle of the widest inside stretch of the horizontal line through the centroid.
+ * Common practice, no published source.
+ */
+export function interiorPoint(polygon: readonly Point[]): Point {
+  const centre = polygonCentroid(polygon);
+  if (pointInPolygon(centre, polygon)) return centre;
+  const y = centre[1];
+  const xs: number[] = [];
+  for (let i = 0, j = polygon.length - 1; i < polygon.length; j = i++) {
+    const [xi, yi] = polygon[i]!;
+    const [xj, yj] = polygon[j]!;
+    if (yi > y !== yj > y) xs.push(((xj - xi) * (y - yi)) / (yj - yi) + xi);
+  }
+  xs.sort((a, b) => a - b);
+  let best: Point = centre;
+  let widest = -1;
+  for (let k = 0; k + 1 < xs.length; k += 2) {
+    if (xs[k + 1]! - xs[k]! > widest) {
+      widest = xs[k + 1]! - xs[k]!;
+      best = [(xs[k]! + xs[k + 1]!) / 2, y];
+    }
+  }
+  return best;
+}

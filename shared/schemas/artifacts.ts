@@ -200,7 +200,8 @@ export const moveArtifactBody = z
   .object({
     ...placeFields,
     status: z.enum(MOVABLE_STATUSES, { error: 'Choose in place, in store, on loan or missing.' }),
-    reason: text(500, 'Reason', 'free'),
+    /** Required for a move; a first placement on the plan (same compartment, no point yet) needs none. */
+    reason: text(500, 'Reason', 'free').optional(),
     movedOn: isoDate.optional(),
     version: z.number().int().min(1),
   })
@@ -212,7 +213,7 @@ export const archiveArtifactBody = z
   .meta({ id: 'ArchiveArtifactBody' });
 export type ArchiveArtifactBody = z.input<typeof archiveArtifactBody>;
 
-export const MOVE_KINDS = ['recorded', 'moved', 'status', 'deaccessioned'] as const;
+export const MOVE_KINDS = ['recorded', 'placed', 'moved', 'status', 'deaccessioned'] as const;
 export type MoveKind = (typeof MOVE_KINDS)[number];
 
 const placeSnapshot = z.object({

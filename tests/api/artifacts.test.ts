@@ -66,6 +66,49 @@ describe('artifact records', () => {
     expect(await ctx.store.repos.artifacts.findByNumber(vesselId, '2019.1.1')).toBeNull();
   });
 
+  it('puts an artifact on the plan of its own compartment as a placement: no reason, no move from a room to itself', async () => {
+    const created = await addArtifact(curator, vesselId, { objectNumber: '2019.5.1', name: 'Oil can', compartmentId: place.first, status: 'in-store' });
+    expect(created.location.point).toBeNull();
+    const placed = await curator.post(`/api/v1/artifacts/${created.id}/moves`, { compartmentId: place.first, point: [400, 500], status: 'in-store', version: created.version });
+    expect(placed.status, JSON.stringify(placed.body)).toBe(201);
+    expect(placed.body).toMatchObject({ status: 'in-store', location: { compartmentId: place.first, point: [400, 500] }, version: created.version + 1 });
+    const history = (await curator.get(`/api/v1/artifacts/${created.id}/moves`)).body;
+    expect(history.map((m: { kind: string }) => m.kind)).toEqual(['placed', 'recorded']);
+    expect(history[0]).toMatchObject({ reason: '', to: { compartmentLabel: '1-10-1-Q Store room', point: [400, 500] } });
+    expect(history.some((m: { kind: string }) => m.kind === 'moved')).toBe(false);
+    const audit = await ctx.store.repos.auditEvents.latestFor('artifact', created.id, 5);
+    expect(audit[0]).toMatchObject({ action: 'move', summary: 'Artifact 2019.5.1 placed on the plan in 1-10-1-Q Store room' });
+
+    // Once on the plan, moving it within the room, or to another room, is a move and needs its reason.
+    const noReason = await curator.post(`/api/v1/artifacts/${created.id}/moves`, { compartmentId: place.first, point: [600, 500], status: 'in-store', version: placed.body.version });
+    expect(noReason.status).toBe(422);
+    expect(noReason.body.error.fields.reason).toBe('Reason is required.');
+    const blank = await curator.post(`/api/v1/artifacts/${created.id}/moves`, { compartmentId: place.second, point: [1500, 500], status: 'in-store', reason: ' ', version: placed.body.version });
+    expect(blank.status).toBe(400);
+    // A status change with the first point is not a bare placement either.
+    const other = await addArtifact(curator, vesselId, { objectNumber: '2019.5.2', compartmentId: place.first, status: 'in-store' });
+    const withStatus = await curator.post(`/api/v1/artifacts/${other.id}/moves`, { compartmentId: place.first, point: [400, 500], status: 'in-place', version: other.version });
+    expect(withStatus.status).toBe(422);
+    expect(withStatus.body.error.fields.reason).toBeDefined();
+    // A stale placement answers 409 like any other change.
+    expect((await curator.post(`/api/v1/artifacts/${created.id}/moves`, { compartmentId: place.first, point: [400, 500], status: 'in-store', version: created.version })).status).toBe(409);
+  });
+
+  it('keeps a moved artifact on the plan: at the centre of its new compartment until it is placed', async () => {
+    const created = await addArtifact(curator, vesselId, { objectNumber: '2019.6.1', name: 'Lantern', compartmentId: place.first, point: [200, 300] });
+    const moved = await curator.post(`/api/v1/artifacts/${created.id}/moves`, { compartmentId: place.second, point: null, status: 'in-place', reason: 'Moved for display', version: created.version });
+    expect(moved.status, JSON.stringify(moved.body)).toBe(201);
+    // The Magazine's outline is the rectangle 1000-1900 by 100-900: its centroid is (1450, 500).
+    expect(moved.body.location).toMatchObject({ compartmentId: place.second, point: [1450, 500] });
+    const markers = (await curator.get(`/api/v1/decks/${place.deckId}/artifacts`)).body;
+    expect(markers.find((m: { id: number }) => m.id === created.id)).toMatchObject({ point: [1450, 500] });
+    const history = (await curator.get(`/api/v1/artifacts/${created.id}/moves`)).body;
+    expect(history[0]).toMatchObject({ kind: 'moved', from: { compartmentLabel: '1-10-1-Q Store room', point: [200, 300] }, to: { compartmentLabel: '1-40-2-M Magazine', point: [1450, 500] } });
+    // Off the ship, there is no point to keep.
+    const ashore = await curator.post(`/api/v1/artifacts/${created.id}/moves`, { compartmentId: null, point: null, status: 'in-store', reason: 'To the shore store', version: moved.body.version });
+    expect(ashore.body.location.point).toBeNull();
+  });
+
   it('answers a stale save with 409 naming what the other person changed, and keeps their change', async () => {
     const created = await addArtifact(curator, vesselId, { objectNumber: '2019.4.12', name: 'Gauge' });
     const first = await curator.patch(`/api/v1/artifacts/${created.id}`, { name: 'Steam gauge', description: 'Bourdon tube', version: created.version });

@@ -15,7 +15,7 @@ function json(status: number, body: unknown) {
 const artifact = { id: 7, objectNumber: '2019.4.12', name: 'Steam gauge', status: 'in-place' as const, version: 3 };
 const boilerRoom = compartmentFixture({ id: 4, designation: '2-40-0-E', name: 'Boiler room' });
 
-async function mountDialog(answer: () => Response) {
+async function mountDialog(answer: () => Response, extra: Record<string, unknown> = {}) {
   const fetchMock = vi.fn((input: string | URL | Request, init?: RequestInit) => {
     const path = String(input);
     if (path.endsWith('/auth/csrf')) return Promise.resolve(json(200, { csrfToken: 'token' }));
@@ -25,7 +25,7 @@ async function mountDialog(answer: () => Response) {
   vi.stubGlobal('fetch', fetchMock);
   const pinia = createPinia();
   const wrapper = mount(DeckMapPlaceDialog, {
-    props: { visible: true, artifact, from: '2-62-0-E · Engine room', to: boilerRoom, point: [1900, 450] },
+    props: { visible: true, artifact, from: '2-62-0-E · Engine room', to: boilerRoom, point: [1900, 450], ...extra },
     global: { plugins: [pinia, PiniaColada, [PrimeVue, { unstyled: true }]] },
     attachTo: document.body,
   });
@@ -67,6 +67,21 @@ describe('DeckMapPlaceDialog', () => {
     });
     expect(wrapper.emitted('saved')).toEqual([[{ id: 7 }]]);
     expect(wrapper.emitted('update:visible')).toEqual([[false]]);
+  });
+
+  it('puts an artifact on the plan of the compartment it is recorded in without asking why, keeping its status', async () => {
+    const stored = { ...artifact, status: 'in-store' as const };
+    const { wrapper, fetchMock, page } = await mountDialog(() => json(201, { id: 7 }), { artifact: stored, from: '2-40-0-E · Boiler room, no point on the plan', firstPlacement: true });
+    expect(page.text()).toContain('Place on the plan');
+    expect(page.text()).toContain('Its first point on the plan, in 2-40-0-E · Boiler room');
+    expect(page.text()).not.toContain('From 2-40-0-E');
+    expect(page.find('input#place-reason').exists()).toBe(false);
+
+    await page.find('form').trigger('submit');
+    await flushPromises();
+    const [, init] = movesCalls(fetchMock)[0]!;
+    expect(JSON.parse(String(init!.body))).toEqual({ compartmentId: 4, point: [1900, 450], status: 'in-store', version: 3 });
+    expect(wrapper.emitted('saved')).toEqual([[{ id: 7 }]]);
   });
 
   it('hands a 409 back as refused and closes, since nothing in the form can fix it', async () => {

@@ -46,15 +46,17 @@ describe('the collection, end to end', () => {
     await page.waitForTimeout(500);
     const box = (await room.boundingBox())!;
     await page.mouse.click(box.x + box.width * 0.5, box.y + box.height * 0.5);
-    const move = page.getByRole('dialog', { name: 'Record the move' });
-    await move.getByLabel('Reason').fill('Fitted on the engine column');
+    // Recorded in the engine room without a point: its first point is a placement, so no reason is asked.
+    const move = page.getByRole('dialog', { name: 'Place on the plan' });
+    await expect.poll(() => move.getByText('Its first point on the plan, in 2-62-0-E · Engine room').isVisible()).toBe(true);
+    expect(await move.getByLabel('Reason').count()).toBe(0);
     await screenshot(page, 'collection-place-on-plan-1440');
-    await move.getByRole('button', { name: 'Save the move' }).click();
+    await move.getByRole('button', { name: 'Place it here' }).click();
     await expect.poll(() => page.url()).not.toMatch(/place=/);
     const placed = await (await page.request.get(`/api/v1/artifacts/${id}`)).json();
     expect(placed.location).toMatchObject({ compartmentDesignation: '2-62-0-E', point: expect.any(Array) });
     const history = await (await page.request.get(`/api/v1/artifacts/${id}/moves`)).json();
-    expect(history.map((m: { kind: string; reason: string }) => `${m.kind}: ${m.reason}`)).toEqual(['moved: Fitted on the engine column', 'recorded: Recorded in the collection']);
+    expect(history.map((m: { kind: string; reason: string }) => `${m.kind}: ${m.reason}`)).toEqual(['placed: ', 'recorded: Recorded in the collection']);
     await expect.poll(() => page.getByRole('button', { name: '2026.9.1 Sight-feed lubricator' }).isVisible(), { timeout: 10_000 }).toBe(true);
 
     await page.getByRole('link', { name: 'Collection' }).click();

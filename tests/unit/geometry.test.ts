@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { calibrateFromFrames, calibrateFromPoints, areaInSquareMetres, CalibrationError, lengthInMetres, metresToPlanUnits } from '../../shared/calc/calibration.js';
-import { isSelfIntersecting, polygonArea, polygonCentroid, polygonPerimeter, polygonProblem, polylineLength, type Point } from '../../shared/calc/geometry.js';
+import { interiorPoint, isSelfIntersecting, pointInPolygon, polygonArea, polygonCentroid, polygonPerimeter, polygonProblem, polylineLength, type Point } from '../../shared/calc/geometry.js';
 import { formatFeetAndInches, parseFeetAndInches, squareMetresToSquareFeet } from '../../shared/calc/units.js';
 
 const plan = { width: 1000, height: 800 };
@@ -113,5 +113,22 @@ describe('feet and inches', () => {
     expect(formatFeetAndInches(3.81)).toBe('12′ 6″');
     expect(formatFeetAndInches(3.6576)).toBe('12′');
     expect(formatFeetAndInches(0.1524)).toBe('6″');
+  });
+});
+
+describe('a point inside an outline (where a moved artifact waits until placed)', () => {
+  it('is the centroid of a rectangle', () => {
+    expect(interiorPoint([[1000, 100], [1900, 100], [1900, 900], [1000, 900]])).toEqual([1450, 500]);
+  });
+
+  it('falls back to the middle of an inside stretch when a U-shaped outline has its centroid in the gap (common practice, no published source)', () => {
+    // By hand: a 300 × 100 base (centroid y 50) and two 100 × 200 legs (centroid y 200): centroid (150, 135.7), in the gap.
+    const u: Point[] = [[0, 0], [300, 0], [300, 300], [200, 300], [200, 100], [100, 100], [100, 300], [0, 300]];
+    const centre = polygonCentroid(u);
+    expect(pointInPolygon(centre, u)).toBe(false);
+    const inside = interiorPoint(u);
+    expect(pointInPolygon(inside, u)).toBe(true);
+    expect(inside[0]).toBe(50);
+    expect(inside[1]).toBeCloseTo(135.714, 3);
   });
 });
