@@ -52,7 +52,7 @@ export function presentReportSummary(report: ConditionReportEntity, subjectLabel
   };
 }
 
-export function presentReport(report: ConditionReportEntity, subjectLabel: string, supersededById: number | null, findings: ConditionFindingEntity[], amendmentId: number | null, viewer: Express.User, hazardKinds: readonly HazardKind[] = []): ConditionReport {
+export function presentReport(report: ConditionReportEntity, subjectLabel: string, supersededById: number | null, findings: ConditionFindingEntity[], amendmentId: number | null, viewer: Express.User, hazardKinds: readonly HazardKind[] = [], openedByIncidentId: number | null = null): ConditionReport {
   const draft = report.status === 'draft';
   const readFindings = can(viewer.role, 'conditionReport', 'readFindings');
   return {
@@ -65,6 +65,7 @@ export function presentReport(report: ConditionReportEntity, subjectLabel: strin
     overrideReason: readFindings ? report.overrideReason : null,
     findings: readFindings ? findings.map(presentFinding) : null,
     subjectHazards: cautionsFor(hazardKinds),
+    openedByIncidentId,
     version: report.version,
     abilities: {
       update: draft && can(viewer.role, 'conditionReport', 'update'),

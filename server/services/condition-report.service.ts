@@ -71,7 +71,8 @@ export class ConditionReportService {
     if (!report) throw new NotFoundError('The condition report');
     const [subject, findings, amendment] = [await this.subjectOf(repos, report.subjectType, report.subjectId), await repos.conditionReports.findings(id), await repos.conditionReports.amendmentOf(id)];
     const hazards = subject.compartmentId === null ? [] : ((await repos.hazards.kindsFor([subject.compartmentId])).get(subject.compartmentId) ?? []);
-    return presentReport(report, subject.label, amendment?.status === 'submitted' ? amendment.id : null, findings, amendment?.id ?? null, viewer, hazards);
+    const opener = (await repos.incidents.forSubject(report.subjectType, report.subjectId)).find((i) => i.reportIds.includes(report.id));
+    return presentReport(report, subject.label, amendment?.status === 'submitted' ? amendment.id : null, findings, amendment?.id ?? null, viewer, hazards, opener?.id ?? null);
   }
 
   /** Recomputes the grade and counts from the findings, saves the report and its search document. */
@@ -106,6 +107,9 @@ export class ConditionReportService {
     ];
     const mediaIds = new Set((await repos.media.forOwner('condition-report', id)).filter((m) => m.kind === 'photo').map((m) => m.id));
     for (const f of findings) if (f.location?.on === 'photo') mediaIds.add(f.location.mediaId);
+    // the photos of the incident that opened the report are its evidence too
+    const opener = (await repos.incidents.forSubject(report.subjectType, report.subjectId)).find((i) => i.reportIds.includes(report.id));
+    if (opener) for (const m of await repos.media.forOwner('incident', opener.id)) if (m.kind === 'photo') mediaIds.add(m.id);
     const photos: PdfPhoto[] = [];
     for (const mediaId of mediaIds) {
       const media = await repos.media.findById(mediaId);

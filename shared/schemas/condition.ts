@@ -196,6 +196,8 @@ export const conditionReport = conditionReportSummary
     findings: z.array(finding).nullable(),
     /** The hazards recorded where the subject is (an artifact's are its compartment's), each with its caution. */
     subjectHazards: hazardCautions,
+    /** The incident that opened this report as a draft, whose photos the report shows. */
+    openedByIncidentId: z.number().int().nullable(),
     version: z.number().int(),
     abilities: z.object({ update: z.boolean(), submit: z.boolean(), amend: z.boolean(), delete: z.boolean(), readFindings: z.boolean() }),
   })

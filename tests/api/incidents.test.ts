@@ -222,3 +222,24 @@ describe('the findings an incident opens', () => {
     expect(onRoom).toMatchObject({ agent: 'thieves-and-vandals', damageType: 'graffiti', description: expect.stringMatching(/Graffiti sprayed on the magazine bulkhead\.$/) });
   });
 });
+
+describe('an incident’s photos', () => {
+  it('show on the draft reports it opened and print in their PDF', async () => {
+    const { cameraJpeg } = await import('../support/images.js');
+    const { extractText, getDocumentProxy } = await import('unpdf');
+    const logged = (await conservator.post('/api/v1/incidents', { vesselId, kind: 'vandalism', title: 'Gauge glass smashed', foundOn: '2026-11-29', artifactIds: [gaugeId] })).body;
+    const photo = (await conservator.agent.post(`/api/v1/media?ownerType=incident&ownerId=${logged.id}`).set('x-csrf-token', conservator.csrf).attach('file', await cameraJpeg(), 'scene.jpg')).body;
+    await conservator.patch(`/api/v1/media/${photo.id}`, { caption: 'Broken glass on the deck plates below the gauge', version: photo.version });
+    const report = (await conservator.get(`/api/v1/condition-reports/${logged.reportIds[0]}`)).body;
+    expect(report.openedByIncidentId).toBe(logged.id);
+    const other = (await conservator.post('/api/v1/condition-reports', { subjectType: 'artifact', subjectId: gaugeId, inspectedOn: '2026-11-30' })).body;
+    expect(other.openedByIncidentId).toBeNull();
+    const res = await conservator.get(`/api/v1/condition-reports/${report.id}/pdf`).buffer(true).parse((r, done) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (c: Buffer) => chunks.push(c));
+      r.on('end', () => done(null, Buffer.concat(chunks)));
+    });
+    const { text } = await extractText(await getDocumentProxy(new Uint8Array(res.body as Buffer)), { mergePages: true });
+    expect(text.replace(/\s+/g, ' ')).toContain('Broken glass on the deck plates below the gauge');
+  });
+});
