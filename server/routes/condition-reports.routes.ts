@@ -74,6 +74,23 @@ export function conditionReportRoutes(api: ApiRouter, reports: ConditionReportSe
   });
 
   api.route({
+    method: 'get',
+    path: '/condition-reports/:id/summary.pdf',
+    tag,
+    summary: 'The report as a summary PDF for grant applications: grade, rule, summary, hazards and publishable photos, without the findings',
+    access: allowed('conditionReport', 'read'),
+    params: idParam,
+    produces: 'application/pdf',
+    errors: [404],
+    handler: async ({ params, res }) => {
+      const { pdf, fileName } = await reports.summaryPdf(params.id);
+      res.setHeader('Content-Type', 'application/pdf');
+      res.setHeader('Content-Disposition', `attachment; filename="${fileName}"`);
+      res.end(pdf);
+    },
+  });
+
+  api.route({
     method: 'patch',
     path: '/condition-reports/:id',
     tag,

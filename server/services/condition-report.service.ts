@@ -14,6 +14,7 @@ import { changesBetween, recordAudit, type Actor } from './audit.service.js';
 import type { FileStore } from '../storage/file-store.js';
 import type { ConditionAlerts } from './condition-alerts.js';
 import { conditionReportPdf, type PdfPhoto } from './condition-report-pdf.js';
+import { conditionSummaryPdf } from './condition-summary-pdf.js';
 import { readableMedia } from './media-access.js';
 import { derivativeFile } from './media-derivatives.js';
 import { staleEditError } from './stale-edit.js';
@@ -132,6 +133,33 @@ export class ConditionReportService {
       hazards: subject.compartmentId === null ? [] : ((await repos.hazards.kindsFor([subject.compartmentId])).get(subject.compartmentId) ?? []),
     });
     return { pdf, fileName: `condition-report-${id}-rev${report.revision}.pdf` };
+  }
+
+  /**
+   * The summary PDF for every role that reads the report: no findings, and only the photos a person
+   * marked for public use and described (publishable), the report's own and then its subject's.
+   */
+  async summaryPdf(id: number): Promise<{ pdf: Buffer; fileName: string }> {
+    const repos = this.store.repos;
+    const report = await repos.conditionReports.findById(id);
+    if (!report) throw new NotFoundError('The condition report');
+    const subject = await this.subjectOf(repos, report.subjectType, report.subjectId);
+    const { grade, ruleLine } = gradeFromFindings(await repos.conditionReports.findings(id));
+    const candidates = [...(await repos.media.forOwner('condition-report', id)), ...(await repos.media.forOwner(report.subjectType, report.subjectId))];
+    const photos: PdfPhoto[] = candidates
+      .filter((m) => m.kind === 'photo' && m.publicUse && m.altText.trim().length > 0)
+      .map((m) => ({ file: derivativeFile(this.files.path(m.storageKey), 'display'), caption: [m.caption, m.altText, m.credit && `Photo: ${m.credit}`].filter(Boolean).join(' · ') }));
+    const pdf = await conditionSummaryPdf({
+      organisationName: (await repos.settings.get()).organisationName,
+      vesselName: (await repos.vessels.findById(report.vesselId))?.name ?? '',
+      subjectLabel: subject.label,
+      report,
+      supersededById: await this.supersededBy(repos, id),
+      rule: { grade, ruleLine },
+      photos,
+      hazards: subject.compartmentId === null ? [] : ((await repos.hazards.kindsFor([subject.compartmentId])).get(subject.compartmentId) ?? []),
+    });
+    return { pdf, fileName: `condition-summary-${id}-rev${report.revision}.pdf` };
   }
 
   /** A subject's reports and incidents over time, and its photos (its own and its reports', as the viewer may read them) by date. */

@@ -16,6 +16,8 @@ export const addFinding = (reportId: number, body: CreateFindingBody) => api.pos
 export const updateFinding = (reportId: number, findingId: number, body: UpdateFindingBody) => api.patch<ConditionReport>(`/condition-reports/${reportId}/findings/${findingId}`, body);
 /** Link that downloads the report as a PDF. */
 export const reportPdfUrl = (id: number) => apiUrl(`/condition-reports/${id}/pdf`);
+/** Grade, rule, summary, hazards and publishable photos: for every role that reads the report. */
+export const reportSummaryPdfUrl = (id: number) => apiUrl(`/condition-reports/${id}/summary.pdf`);
 export const removeFinding = (reportId: number, findingId: number) => api.delete<ConditionReport>(`/condition-reports/${reportId}/findings/${findingId}`);
 
 export const listIncidents = (params: Partial<IncidentsQuery> & { vesselId: number }) => api.get<Page<Incident>>('/incidents', params);

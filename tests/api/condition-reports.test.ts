@@ -1,3 +1,4 @@
+import request from 'supertest';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { addArtifact, deckWithCompartments } from '../support/collection.js';
 import { buildVessel } from '../support/factories.js';
@@ -214,6 +215,55 @@ describe('the report as a PDF', () => {
 
     const docent = (await signedInAs(ctx.app, ctx.store, 'docent')).client;
     expect((await docent.get(`/api/v1/condition-reports/${report.id}/pdf`)).status).toBe(403);
+  });
+});
+
+describe('the summary PDF for those who may not read findings', () => {
+  it('gives docents and fundraisers the grade, the rule line, the summary, the hazards and the publishable photos, and nothing of the findings', async () => {
+    const { cameraJpeg } = await import('../support/images.js');
+    const { extractText, getDocumentProxy } = await import('unpdf');
+    const report = await draft();
+    const upload = async (ownerType: string, ownerId: number, name: string, by = conservator) => {
+      const res = await by.agent.post(`/api/v1/media?ownerType=${ownerType}&ownerId=${ownerId}`).set('x-csrf-token', by.csrf).attach('file', await cameraJpeg(), name);
+      expect(res.status, JSON.stringify(res.body)).toBe(201);
+      return res.body;
+    };
+    const shown = await upload('condition-report', report.id, 'shown.jpg');
+    expect((await conservator.patch(`/api/v1/media/${shown.id}`, { caption: 'Deckhead after the winter', altText: 'Rust streaks on a white-painted steel deckhead', publicUse: true, version: shown.version })).status).toBe(200);
+    const internal = await upload('condition-report', report.id, 'internal.jpg');
+    await conservator.patch(`/api/v1/media/${internal.id}`, { caption: 'Behind the locker, staff only', altText: 'Flaking paint behind a locker', publicUse: false, version: internal.version });
+    const room = await upload('compartment', place.first, 'room.jpg', curator);
+    await curator.patch(`/api/v1/media/${room.id}`, { caption: 'The store room from the hatch', altText: 'A narrow store room with shelves on both sides', publicUse: true, version: room.version });
+    await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { ...coating, description: 'Blistered paint along the frame', recommendedAction: 'Spot-prime and overcoat the blisters' });
+    const found = (await conservator.get(`/api/v1/condition-reports/${report.id}`)).body;
+    const overridden = await conservator.patch(`/api/v1/condition-reports/${report.id}`, { gradeOverride: 'poor', overrideReason: 'Hidden corrosion behind the lagging', version: found.version });
+    expect(overridden.status).toBe(200);
+    expect((await conservator.post(`/api/v1/compartments/${place.first}/hazards`, { kind: 'lead-paint', notes: 'Tested positive on the casings' })).status).toBe(201);
+
+    for (const role of ['docent', 'fundraiser'] as const) {
+      const client = (await signedInAs(ctx.app, ctx.store, role)).client;
+      const res = await client.get(`/api/v1/condition-reports/${report.id}/summary.pdf`).buffer(true).parse((r, done) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (c: Buffer) => chunks.push(c));
+        r.on('end', () => done(null, Buffer.concat(chunks)));
+      });
+      expect(res.status).toBe(200);
+      expect(res.headers['content-type']).toBe('application/pdf');
+      const { text } = await extractText(await getDocumentProxy(new Uint8Array(res.body as Buffer)), { mergePages: true });
+      const flat = text.replace(/\s+/g, ' ');
+      expect(flat).toContain('Condition summary: 1-10-1-Q Store room');
+      expect(flat).toContain('Overall condition: Poor');
+      expect(flat).toContain('Otherwise fair if any finding is moderate');
+      expect(flat).toContain('Winter survey of the store room.');
+      expect(flat).toContain('Lead-based paint');
+      expect(flat).toContain('Rust streaks on a white-painted steel deckhead');
+      expect(flat).toContain('Deckhead after the winter');
+      expect(flat).toContain('A narrow store room with shelves on both sides');
+      for (const secret of ['Blistered paint along the frame', 'Spot-prime and overcoat', '1 moderate finding', 'Hidden corrosion', 'Behind the locker', 'Flaking paint behind a locker', 'Coating failure']) expect(flat).not.toContain(secret);
+      expect((await client.get(`/api/v1/condition-reports/${report.id}/pdf`)).status).toBe(403);
+    }
+    const anonymous = await request(ctx.app).get(`/api/v1/condition-reports/${report.id}/summary.pdf`);
+    expect(anonymous.status).toBe(401);
   });
 });
 
