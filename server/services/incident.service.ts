@@ -117,8 +117,11 @@ export class IncidentService {
         for (const id of ids) {
           // each item's finding takes the lines of the text that name it, and the damage they imply
           const names = type === 'artifact' ? await this.artifactNames(repos, id) : await this.compartmentNames(repos, id);
-          const about = linesAbout(body.description, names) ?? body.description;
-          const finding = { ...impliedFinding(body.kind, `${body.title}. ${about}`), severity, description: `${INCIDENT_KIND_LABELS[body.kind]} (incident ${incident.id}): ${body.title}. ${about}`.trim() };
+          const lines = linesAbout(body.description, names);
+          const about = lines ?? body.description;
+          // the item's own lines decide its damage; without any, the title and the whole text
+          const implied = lines ? impliedFinding(body.kind, lines) : impliedFinding(body.kind, `${body.title}. ${body.description}`);
+          const finding = { ...implied, severity, description: `${INCIDENT_KIND_LABELS[body.kind]} (incident ${incident.id}): ${body.title}. ${about}`.trim() };
           await repos.incidents.link(incident.id, type, id);
           // a docent's incident opens drafts with no surveyor: a conservator completes them
           const surveyorId = can(viewer.role, 'conditionReport', 'create') ? viewer.id : null;

@@ -32,9 +32,9 @@ export function impliedFinding(kind: IncidentKind, text: string): { agent: Agent
   return usual;
 }
 
-/** The lines of the incident's text that name an item (its number, or a word of its name), or null when none does. */
+/** The lines (sentences, or clauses of one) of the incident's text that name an item (its number, or a word of its name), or null when none does. */
 export function linesAbout(text: string, names: readonly string[]): string | null {
-  const lines = text.split(/(?<=[.!?])\s+|\n+/).map((l) => l.trim()).filter(Boolean);
+  const lines = text.split(/(?<=[.!?])\s+|\n+|(?<=[,;:])\s+/).map((l) => l.trim().replace(/[,;:]$/, '')).filter(Boolean);
   const words = names.flatMap((n) => [n, ...n.split(/[\s,;:()]+/).filter((w) => w.length >= 4)]).map((w) => w.toLowerCase());
   const about = lines.filter((l) => words.some((w) => l.toLowerCase().includes(w)));
   return about.length ? about.join(' ') : null;

@@ -18,5 +18,8 @@ describe('the finding an incident implies', () => {
     expect(linesAbout(text, ['2019.4.12', 'Steam gauge'])).toBe('Glass of the steam gauge broken.');
     expect(linesAbout(text, ['1-45-1-Q', 'Ticket counter'])).toBe('Initials cut into the ticket counter.');
     expect(linesAbout(text, ['Telegraph'])).toBeNull();
+    // clauses of one sentence go each to the item they name
+    const one = 'Found at opening: the glass of the bulkhead clock broken, initials cut into the ticket counter.';
+    expect(linesAbout(one, ['2003.1.3', 'Bulkhead clock'])).toBe('the glass of the bulkhead clock broken');
   });
 });
