@@ -88,7 +88,12 @@ describe('an incident, from a docent to a conservator', () => {
     await expect.poll(async () => (await (await page.request.get(`/api/v1/condition-reports/${reportId}`)).json()).status, { timeout: 10_000 }).toBe('submitted');
     await screenshot(page, 'incident-conservator-submitted-1440');
 
-    // Once the space is opened again, it leaves today's closures.
+    // Once a curator (who keeps the compartments) opens the space again, it leaves today's closures.
+    const curator = await openBrowser();
+    browsers.push(curator);
+    page = curator.page;
+    await signIn(page, 'curator@shipkeeper.test');
+    await page.waitForURL('**/app');
     await page.goto(incidentUrl);
     await page.getByRole('region', { name: 'Affected' }).getByRole('link', { name: /Forward saloon/ }).click();
     await page.waitForURL(/\/app\/compartments\/\d+$/);
