@@ -49,10 +49,10 @@ export function passwordResetMail(input: { to: string; name: string; url: string
   };
 }
 
-/** To a curator: an incident was logged, or a submitted report holds critical findings. */
+/** To a curator or conservator: an incident was logged, or a submitted report holds critical findings. */
 export function conditionAlertMail(input: { to: string; name: string; subject: string; lines: string[]; url: string; organisationName: string }): OutgoingMail {
   const paragraphs = [`Hello ${input.name},`, ...input.lines];
-  const footer = `You receive this as a curator of ${input.organisationName}. Follow the site safety plan before anyone enters a space that may be unsafe.`;
+  const footer = `You receive this as a curator or conservator of ${input.organisationName}. Follow the site safety plan before anyone enters a space that may be unsafe.`;
   return {
     to: input.to,
     subject: input.subject,

@@ -25,7 +25,7 @@ function checkDates(foundOn: string, occurredOn: string | null) {
 /**
  * Incidents: what happened, what it affected and what was done. Logging one can close affected
  * compartments to visitors, opens a draft condition report with a finding on every affected item,
- * and tells the curators by e-mail.
+ * and tells the curators and the conservators by e-mail.
  */
 export class IncidentService {
   constructor(private readonly store: Store, private readonly reports: ConditionReportService, private readonly alerts: ConditionAlerts) {}
