@@ -1,7 +1,7 @@
 import Papa from 'papaparse';
 import { checkObjectNumber } from '../../shared/calc/object-number.js';
 import { ARTIFACT_CSV_COLUMNS, IMPORT_MAX_ROWS, type ImportRow } from '../../shared/schemas/artifact-import.js';
-import { ARTIFACT_CATEGORIES, CATEGORY_LABELS, createArtifactBody } from '../../shared/schemas/artifacts.js';
+import { ARTIFACT_CATEGORIES, ARTIFACT_STATUSES, CATEGORY_LABELS, createArtifactBody, STATUS_LABELS } from '../../shared/schemas/artifacts.js';
 import { characterProblem, withoutInvalidCharacters, type TextKind } from '../../shared/schemas/text.js';
 import { ApiError, UnprocessableError } from '../http/errors.js';
 import { checkUnplaced } from './artifact-place.js';
@@ -44,6 +44,14 @@ function categoryOf(value: string): string {
   const v = value.trim().toLowerCase();
   const byLabel = ARTIFACT_CATEGORIES.find((c) => CATEGORY_LABELS[c].toLowerCase() === v);
   return byLabel ?? v;
+}
+
+/** A status as written in a sheet: its code or its label ("In situ", "on display"). */
+function statusOf(value: string): string | undefined {
+  const v = value.trim().toLowerCase();
+  if (!v) return undefined;
+  const byLabel = ARTIFACT_STATUSES.find((s) => STATUS_LABELS[s].toLowerCase() === v);
+  return byLabel ?? v.replace(/\s+/g, '-');
 }
 
 function numberOf(value: string | undefined): number | null | string {
@@ -142,7 +150,7 @@ export function checkRows(records: CsvRecord[], pattern: string, compartments: I
       depth: numberOf(record.depth),
       dimensionUnit: (record.dimension_unit ?? '').trim().toLowerCase() || undefined,
       significance: record.significance ?? '',
-      status: (record.status ?? '').trim().toLowerCase().replace(/\s+/g, '-') || undefined,
+      status: statusOf(record.status ?? ''),
       compartmentId: compartment?.id ?? null,
       point: null,
     });

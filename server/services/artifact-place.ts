@@ -1,3 +1,4 @@
+import { ABOARD_STATUSES, STATUS_LABELS } from '../../shared/schemas/artifacts.js';
 import { pointInPolygon, type Point } from '../../shared/calc/geometry.js';
 import type { ArtifactStatus } from '../../shared/schemas/artifacts.js';
 import type { CompartmentEntity } from '../db/entities/compartment.entity.js';
@@ -35,5 +36,5 @@ export async function checkPlace(repos: Repositories, vesselId: number, compartm
 /** The rule for an artifact in no compartment: no point, and not in place (the CSV import checks it row by row). */
 export function checkUnplaced(point: Point | null, status: ArtifactStatus): void {
   if (point) throw new UnprocessableError('A point on the plan needs a compartment.', { compartmentId: 'Choose the compartment the point is in.' });
-  if (status === 'in-place') throw new UnprocessableError('An artifact in place is aboard: choose its compartment.', { compartmentId: 'Choose a compartment, or another status.' });
+  if (ABOARD_STATUSES.includes(status)) throw new UnprocessableError(`An artifact ${STATUS_LABELS[status].toLowerCase()} is aboard: choose its compartment.`, { compartmentId: 'Choose a compartment, or another status.' });
 }

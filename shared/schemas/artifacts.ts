@@ -31,13 +31,17 @@ export const CATEGORY_LABELS: Record<ArtifactCategory, string> = {
   other: 'Other',
 };
 
-export const ARTIFACT_STATUSES = ['in-place', 'in-store', 'on-loan', 'missing', 'deaccessioned'] as const;
+export const ARTIFACT_STATUSES = ['in-place', 'on-display', 'under-treatment', 'in-store', 'on-loan', 'missing', 'deaccessioned'] as const;
 export type ArtifactStatus = (typeof ARTIFACT_STATUSES)[number];
 /** Statuses a move may set; deaccessioning is its own step with a reason. */
-export const MOVABLE_STATUSES = ['in-place', 'in-store', 'on-loan', 'missing'] as const;
+export const MOVABLE_STATUSES = ['in-place', 'on-display', 'under-treatment', 'in-store', 'on-loan', 'missing'] as const;
+/** Statuses of an object aboard, which therefore needs its compartment. */
+export const ABOARD_STATUSES: readonly ArtifactStatus[] = ['in-place', 'on-display'];
 
 export const STATUS_LABELS: Record<ArtifactStatus, string> = {
-  'in-place': 'In place',
+  'in-place': 'In situ',
+  'on-display': 'On display',
+  'under-treatment': 'Under treatment',
   'in-store': 'In store',
   'on-loan': 'On loan',
   missing: 'Missing',

@@ -17,10 +17,13 @@ export const CATEGORY_ICON: Record<ArtifactCategory, string> = {
 
 /**
  * How a badge shows its status besides the words: a filled badge is aboard where it belongs; a
- * hollow one is stored; a dashed ring is away on loan; a red dotted ring is missing.
+ * gold ring is on display; a hollow one is stored, with a double ring under treatment; a dashed ring
+ * is away on loan; a red dotted ring is missing.
  */
 export const MARKER_STATUS_PATTERN: Record<ArtifactStatus, string> = {
   'in-place': 'filled badge',
+  'on-display': 'filled badge with a gold ring',
+  'under-treatment': 'hollow badge with a double ring',
   'in-store': 'hollow badge',
   'on-loan': 'dashed ring',
   missing: 'red dotted ring',
@@ -29,6 +32,8 @@ export const MARKER_STATUS_PATTERN: Record<ArtifactStatus, string> = {
 
 export const STATUS_SEVERITY: Record<ArtifactStatus, 'success' | 'info' | 'warn' | 'danger' | 'secondary'> = {
   'in-place': 'success',
+  'on-display': 'success',
+  'under-treatment': 'warn',
   'in-store': 'info',
   'on-loan': 'warn',
   missing: 'danger',

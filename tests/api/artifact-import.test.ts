@@ -118,3 +118,21 @@ describe('CSV export', () => {
     ]);
   });
 });
+
+describe('statuses as registrars write them', () => {
+  it('reads "In situ", "On display" and "Under treatment" by their labels; on display needs a compartment', async () => {
+    const csv = [
+      'object_number,name,category,status,compartment',
+      '2021.1.1,Engine-room clock,tools,In situ,1-10-1-Q',
+      '2021.1.2,Builder’s model,tools,On display,1-10-1-Q',
+      '2021.1.3,Steam whistle,tools,under treatment,',
+      '2021.1.4,Bell,tools,on display,',
+    ].join('\r\n');
+    const preview = (await importCsv('preview', csv)).body;
+    const errors = Object.fromEntries(preview.rows.map((r: { objectNumber: string; errors: { column: string }[] }) => [r.objectNumber, r.errors.map((e) => e.column)]));
+    expect(errors).toEqual({ '2021.1.1': [], '2021.1.2': [], '2021.1.3': [], '2021.1.4': ['compartment'] });
+    expect((await importCsv('valid-only', csv)).status).toBe(200);
+    const list = (await curator.get(`/api/v1/vessels/${vesselId}/artifacts?q=2021.1&sort=objectNumber`)).body.items;
+    expect(list.map((a: { status: string }) => a.status)).toEqual(['in-place', 'on-display', 'under-treatment']);
+  });
+});
