@@ -191,11 +191,7 @@ describe('the report as a PDF', () => {
     const last = await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { artifactId: gaugeId, agent: 'thieves-and-vandals', damageType: 'graffiti', severity: 'slight', description: 'Initials scratched in the paint' });
     await curator.post(`/api/v1/condition-reports/${report.id}/submit`, { version: last.body.version });
 
-    const res = await curator.get(`/api/v1/condition-reports/${report.id}/pdf`).buffer(true).parse((r, done) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => done(null, Buffer.concat(chunks)));
-    });
+    const res = await curator.getBytes(`/api/v1/condition-reports/${report.id}/pdf`);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('application/pdf');
     expect(res.headers['content-disposition']).toBe(`attachment; filename="condition-report-${report.id}-rev1.pdf"`);
@@ -242,11 +238,7 @@ describe('the summary PDF for those who may not read findings', () => {
 
     for (const role of ['docent', 'fundraiser'] as const) {
       const client = (await signedInAs(ctx.app, ctx.store, role)).client;
-      const res = await client.get(`/api/v1/condition-reports/${report.id}/summary.pdf`).buffer(true).parse((r, done) => {
-        const chunks: Buffer[] = [];
-        r.on('data', (c: Buffer) => chunks.push(c));
-        r.on('end', () => done(null, Buffer.concat(chunks)));
-      });
+      const res = await client.getBytes(`/api/v1/condition-reports/${report.id}/summary.pdf`);
       expect(res.status).toBe(200);
       expect(res.headers['content-type']).toBe('application/pdf');
       const { text } = await extractText(await getDocumentProxy(new Uint8Array(res.body as Buffer)), { mergePages: true });
@@ -281,11 +273,7 @@ describe('the PDF in embedded fonts', () => {
     await conservator.patch(`/api/v1/media/${captioned.id}`, { caption: 'Dial face, Žilina side', version: captioned.version });
     await upload('IMG_0002.jpg');
 
-    const res = await curator.get(`/api/v1/condition-reports/${report.id}/pdf`).buffer(true).parse((r, done) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => done(null, Buffer.concat(chunks)));
-    });
+    const res = await curator.getBytes(`/api/v1/condition-reports/${report.id}/pdf`);
     expect(res.status).toBe(200);
     const bytes = res.body as Buffer;
     const { text: extracted } = await extractText(await getDocumentProxy(new Uint8Array(bytes)), { mergePages: true });
@@ -369,11 +357,7 @@ describe('hazards where the work is written', () => {
     expect((await draft('compartment', place.second)).subjectHazards).toEqual([]);
 
     const last = await conservator.post(`/api/v1/condition-reports/${room.id}/findings`, { ...coating, recommendedAction: 'Wire-brush, prime and topcoat' });
-    const res = await curator.get(`/api/v1/condition-reports/${room.id}/pdf`).buffer(true).parse((r, done) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => done(null, Buffer.concat(chunks)));
-    });
+    const res = await curator.getBytes(`/api/v1/condition-reports/${room.id}/pdf`);
     expect(last.status).toBe(201);
     const { text } = await extractText(await getDocumentProxy(new Uint8Array(res.body as Buffer)), { mergePages: true });
     const flat = text.replace(/\s+/g, ' ');

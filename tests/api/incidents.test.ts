@@ -234,11 +234,7 @@ describe('an incident’s photos', () => {
     expect(report.openedByIncidentId).toBe(logged.id);
     const other = (await conservator.post('/api/v1/condition-reports', { subjectType: 'artifact', subjectId: gaugeId, inspectedOn: '2026-11-30' })).body;
     expect(other.openedByIncidentId).toBeNull();
-    const res = await conservator.get(`/api/v1/condition-reports/${report.id}/pdf`).buffer(true).parse((r, done) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => done(null, Buffer.concat(chunks)));
-    });
+    const res = await conservator.getBytes(`/api/v1/condition-reports/${report.id}/pdf`);
     const { text } = await extractText(await getDocumentProxy(new Uint8Array(res.body as Buffer)), { mergePages: true });
     expect(text.replace(/\s+/g, ' ')).toContain('Broken glass on the deck plates below the gauge');
   });

@@ -44,11 +44,7 @@ describe('photos', () => {
     expect(res.body).toMatchObject({ kind: 'photo', mimeType: 'image/jpeg', width: 200, height: 400, takenAt: '2024-05-17T14:03:22', publishable: false });
 
     for (const variant of ['thumb', 'display'] as const) {
-      const file = await curator.get(res.body.urls[variant]).buffer(true).parse((r, done) => {
-        const chunks: Buffer[] = [];
-        r.on('data', (c: Buffer) => chunks.push(c));
-        r.on('end', () => done(null, Buffer.concat(chunks)));
-      });
+      const file = await curator.getBytes(res.body.urls[variant]);
       expect(file.headers['content-type']).toBe('image/webp');
       const body = file.body as Buffer;
       const meta = await sharp(body).metadata();

@@ -25,6 +25,18 @@ export class Client {
     return this.agent.get(path);
   }
 
+  /** A GET whose body is kept as bytes (PDFs, images). */
+  getBytes(path: string) {
+    return this.agent
+      .get(path)
+      .buffer(true)
+      .parse((res, done) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (c: Buffer) => chunks.push(c));
+        res.on('end', () => done(null, Buffer.concat(chunks)));
+      });
+  }
+
   async send(method: 'post' | 'patch' | 'put' | 'delete', path: string, body?: object) {
     if (!this.csrf) await this.fetchCsrf();
     return this.agent[method](path).set('x-csrf-token', this.csrf).send(body ?? {});
