@@ -2,7 +2,6 @@
 // parsing, checking every row, and writing the valid ones in one transaction on a connection of
 // its own. The server holds the app's write lock meanwhile, so no other change interleaves.
 import Database from 'better-sqlite3';
-import { daysAgo } from '../../shared/calc/days.js';
 import { objectNumberSortKey } from '../../shared/calc/object-number.js';
 import type { ImportMode, ImportResult } from '../../shared/schemas/artifact-import.js';
 import { ArtifactImportWriter } from '../db/artifact-import-writer.js';
@@ -10,7 +9,7 @@ import { NotFoundError, UnprocessableError } from '../http/errors.js';
 import { serveJob } from '../jobs/worker-job.js';
 import { compartmentLabel } from '../presenters/artifact.presenter.js';
 import { checkRows, decodeCsv, numbersOf, parseCsv, type CheckedRow } from './artifact-import-rows.js';
-import { recordedAudit, searchDocumentOf } from './artifact-record.js';
+import { recordedAudit, recordedMove, searchDocumentOf } from './artifact-record.js';
 import { auditRowOf, type Actor } from './audit.service.js';
 
 export interface ImportJobInput {
@@ -26,20 +25,14 @@ function write(writer: ArtifactImportWriter, vesselId: number, checked: CheckedR
   const input = checked.input!;
   const fields = { ...input, vesselId, objectNumber: checked.objectNumber, objectNumberSort: objectNumberSortKey(checked.objectNumber), deaccessionReason: null, coverMediaId: null };
   const id = writer.artifact(fields);
-  writer.move(id, {
-    kind: 'recorded',
-    movedOn: daysAgo(0),
-    fromStatus: null,
-    fromCompartmentId: null,
-    fromLabel: null,
-    fromPoint: null,
-    toStatus: fields.status,
-    toCompartmentId: fields.compartmentId,
-    toLabel: compartmentLabel(checked.compartment),
-    toPoint: fields.point,
-    reason: `Imported from ${fileName} (line ${checked.row.line})`,
-    actorId: actor.id,
-  });
+  writer.move(
+    id,
+    recordedMove(
+      { toStatus: fields.status, toCompartmentId: fields.compartmentId, toLabel: compartmentLabel(checked.compartment), toPoint: fields.point },
+      `Imported from ${fileName} (line ${checked.row.line})`,
+      actor.id,
+    ),
+  );
   writer.document(searchDocumentOf({ ...fields, id }));
   writer.audit(auditRowOf(actor, { action: 'create', entityType: 'artifact', entityId: id, vesselId, ...recordedAudit(fields) }));
 }

@@ -1,7 +1,9 @@
 import { CATEGORY_LABELS } from '../../shared/schemas/artifacts.js';
 import type { ArtifactEntity } from '../db/entities/artifact.entity.js';
 import type { SearchDocument } from '../search/search-index.js';
+import type { ArtifactMoveEntity } from '../db/entities/artifact-move.entity.js';
 import { changesBetween } from './audit.service.js';
+import { daysAgo } from '../../shared/calc/days.js';
 
 /**
  * What a new artifact record writes besides its row (search document, audit text), shared by a
@@ -46,4 +48,13 @@ export function recordedAudit(artifact: RecordedFields) {
     summary: `Artifact ${artifact.objectNumber} (${artifact.name}) recorded`,
     changes: changesBetween({} as RecordedFields, artifact, [...DESCRIBING, 'status', 'compartmentId', 'point']),
   };
+}
+
+/** The first entry of an artifact's location history, as a single record and the import both write it. */
+export function recordedMove(
+  to: Pick<ArtifactMoveEntity, 'toStatus' | 'toCompartmentId' | 'toLabel' | 'toPoint'>,
+  reason: string,
+  actorId: number | null,
+): Omit<ArtifactMoveEntity, 'id' | 'artifactId' | 'artifact' | 'actor' | 'createdAt'> {
+  return { kind: 'recorded', movedOn: daysAgo(0), fromStatus: null, fromCompartmentId: null, fromLabel: null, fromPoint: null, ...to, reason, actorId };
 }

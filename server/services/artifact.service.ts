@@ -10,7 +10,7 @@ import { ConflictError, NotFoundError, UnprocessableError } from '../http/errors
 import { compartmentLabel, presentArtifact, presentMarker, presentMove } from '../presenters/artifact.presenter.js';
 import { reindexReportsOf } from '../search/condition-report-document.js';
 import { checkPlace } from './artifact-place.js';
-import { DESCRIBING, recordedAudit, searchDocumentOf } from './artifact-record.js';
+import { DESCRIBING, recordedAudit, recordedMove, searchDocumentOf } from './artifact-record.js';
 import { changesBetween, recordAudit, type Actor } from './audit.service.js';
 import { staleEditError } from './stale-edit.js';
 
@@ -66,18 +66,7 @@ export async function insertArtifact(repos: Repositories, vesselId: number, inpu
   });
   await repos.artifactMoves.create({
     artifactId: artifact.id,
-    kind: 'recorded',
-    movedOn: daysAgo(0),
-    fromStatus: null,
-    fromCompartmentId: null,
-    fromLabel: null,
-    fromPoint: null,
-    toStatus: artifact.status,
-    toCompartmentId: artifact.compartmentId,
-    toLabel: compartmentLabel(compartment),
-    toPoint: artifact.point,
-    reason,
-    actorId: actor.id,
+    ...recordedMove({ toStatus: artifact.status, toCompartmentId: artifact.compartmentId, toLabel: compartmentLabel(compartment), toPoint: artifact.point }, reason, actor.id),
   });
   await repos.search.put(searchDocumentOf(artifact));
   await recordAudit(repos, actor, {
