@@ -9,6 +9,7 @@ export function presentSettings(settings: OrganisationSettingsEntity): Organisat
     unitSystem: settings.unitSystem,
     contactEmail: settings.contactEmail,
     objectNumberPattern: settings.objectNumberPattern,
+    riskScale: settings.riskScale,
     updatedAt: settings.updatedAt.toISOString(),
     version: settings.version,
   };

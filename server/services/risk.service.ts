@@ -1,4 +1,4 @@
-import { abcRisk, bandOf, isHalfStepScore, PRIORITY_LABELS, scoreA, scoreB, scoreC } from '../../shared/calc/abc-risk.js';
+import { abcRisk, bandOf, isHalfStepScore, PRIORITY_LABELS, scoreA, scoreB, scoreC, type RiskScale } from '../../shared/calc/abc-risk.js';
 import { can } from '../../shared/permissions.js';
 import type { Risk, RisksQuery, UpdateRiskBody, createRiskBody } from '../../shared/schemas/risks.js';
 import type { z } from 'zod';
@@ -13,7 +13,7 @@ type Scores = Pick<RiskEntity, 'a' | 'b' | 'c' | 'yearsBetween' | 'lossPerItemPe
 type ScoreInputs = { a: number | null; b: number | null; c: number | null; yearsBetween: number | null; lossPerItemPercent: number | null; assetFractionPercent: number | null };
 
 /** Each score from itself or its plain input; 422 naming the field and its range when off the scale. */
-export function scoresOf(input: ScoreInputs): Scores & Pick<RiskEntity, 'magnitude' | 'band'> {
+export function scoresOf(input: ScoreInputs, scale: RiskScale): Scores & Pick<RiskEntity, 'magnitude' | 'band'> {
   const one = (score: number | null, plain: number | null, convert: (v: number) => number, name: 'a' | 'b' | 'c', plainName: string) => {
     if (plain !== null) {
       try {
@@ -26,10 +26,10 @@ export function scoresOf(input: ScoreInputs): Scores & Pick<RiskEntity, 'magnitu
     if (!isHalfStepScore(score)) throw new UnprocessableError(`${name.toUpperCase()} must be between 1 and 5 in steps of 0.5.`, { [name]: 'Between 1 and 5 in steps of 0.5.' });
     return { score, plain: null };
   };
-  const a = one(input.a, input.yearsBetween, scoreA, 'a', 'yearsBetween');
-  const b = one(input.b, input.lossPerItemPercent, scoreB, 'b', 'lossPerItemPercent');
-  const c = one(input.c, input.assetFractionPercent, scoreC, 'c', 'assetFractionPercent');
-  const risk = abcRisk(a.score, b.score, c.score);
+  const a = one(input.a, input.yearsBetween, (v) => scoreA(v, scale), 'a', 'yearsBetween');
+  const b = one(input.b, input.lossPerItemPercent, (v) => scoreB(v, scale), 'b', 'lossPerItemPercent');
+  const c = one(input.c, input.assetFractionPercent, (v) => scoreC(v, scale), 'c', 'assetFractionPercent');
+  const risk = abcRisk(a.score, b.score, c.score, scale);
   return { a: a.score, b: b.score, c: c.score, yearsBetween: a.plain, lossPerItemPercent: b.plain, assetFractionPercent: c.plain, magnitude: risk.magnitude, band: risk.band };
 }
 
@@ -106,7 +106,7 @@ export class RiskService {
   async create(body: z.output<typeof createRiskBody>, viewer: Express.User, actor: Actor) {
     const saved = await this.store.transaction(async (repos) => {
       if (!(await repos.vessels.findById(body.vesselId))) throw new UnprocessableError('Choose a vessel.', { vesselId: 'No such vessel.' });
-      const scores = scoresOf(body);
+      const scores = scoresOf(body, (await repos.settings.get()).riskScale);
       const subjects = await this.subjectsFor(repos, body.vesselId, body.artifactIds, body.compartmentIds);
       const risk = await repos.risks.create({ vesselId: body.vesselId, statement: body.statement, agent: body.agent, status: body.status, notes: body.notes, ...scores });
       await repos.risks.setSubjects(risk.id, subjects);
@@ -129,7 +129,7 @@ export class RiskService {
         if (fields[plain] !== undefined) inputs[plain] = fields[plain];
         if (fields[score] !== undefined) inputs[score] = fields[score];
       }
-      const scores = scoresOf(inputs);
+      const scores = scoresOf(inputs, (await repos.settings.get()).riskScale);
       const next = { ...fields, ...scores };
       let changes = changesBetween(risk, next, FIELDS);
       if (artifactIds !== undefined || compartmentIds !== undefined) {
@@ -175,6 +175,7 @@ export class RiskService {
     const compartments = (await repos.compartments.page(deck.vesselId, { page: 1, pageSize: 10_000, sort: 'designation', deckId })).items;
     const current = await repos.conditionReports.currentOfCompartments(compartments.map((c) => c.id));
     const risks = await repos.risks.openRisksOnDeck(deckId);
+    const { riskScale } = await repos.settings.get();
     return {
       compartments: compartments.map((c) => {
         const report = current.get(c.id);
@@ -186,7 +187,7 @@ export class RiskService {
           inspectedOn: report?.inspectedOn ?? null,
           openRisks: risk?.count ?? 0,
           maxMagnitude: risk?.maxMagnitude ?? null,
-          band: risk ? bandOf(risk.maxMagnitude) : null,
+          band: risk ? bandOf(risk.maxMagnitude, riskScale) : null,
         };
       }),
     };

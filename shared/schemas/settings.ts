@@ -1,9 +1,29 @@
 import { z } from 'zod';
+import { riskScaleProblems } from '../calc/abc-risk.js';
 import { PATTERN_PROBLEM_MESSAGES, patternProblem } from '../calc/object-number.js';
 import { refuseInvalidCharacters, text } from './text.js';
 
 export const UNIT_SYSTEMS = ['us-customary', 'metric'] as const;
 export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
+
+const floor = (label: string) => z.number({ error: `${label} needs a number (MR).` });
+
+export const riskScale = z
+  .object({
+    aYearsAtFive: z.number({ error: 'Give the years between events at A = 5.' }),
+    stepFactor: z.number({ error: 'Give the factor of one point.' }),
+    bandFloors: z.object({
+      low: floor('Low priority'),
+      medium: floor('Medium priority'),
+      high: floor('High priority'),
+      'very-high': floor('Very high priority'),
+      extreme: floor('Extreme priority'),
+    }),
+  })
+  .superRefine((value, ctx) => {
+    for (const problem of riskScaleProblems(value)) ctx.addIssue({ code: 'custom', message: problem.message, path: problem.field.split('.') });
+  })
+  .meta({ id: 'RiskScale' });
 
 export const organisationSettings = z
   .object({
@@ -13,6 +33,7 @@ export const organisationSettings = z
     unitSystem: z.enum(UNIT_SYSTEMS),
     contactEmail: z.string(),
     objectNumberPattern: z.string(),
+    riskScale,
     updatedAt: z.string(),
     version: z.number().int(),
   })
@@ -33,6 +54,7 @@ export const updateSettingsBody = z
         const problem = patternProblem(value);
         if (problem) ctx.addIssue({ code: 'custom', message: PATTERN_PROBLEM_MESSAGES[problem] });
       }),
+    riskScale,
     version: z.number().int().min(1),
   })
   .partial()

@@ -12,6 +12,14 @@ export interface DeckCalibrationRecord {
   frameSpacingMetres?: number;
 }
 
+/** How the plan's frames are numbered: one frame's x on the plan, the spacing, and the last frame drawn. */
+export interface DeckFramesRecord {
+  referenceFrame: number;
+  referenceX: number;
+  spacingMetres: number;
+  lastFrame: number;
+}
+
 @Entity('decks')
 @Index(['vesselId', 'position'])
 export class DeckEntity {
@@ -55,6 +63,9 @@ export class DeckEntity {
   /** Plan y-coordinate of the centerline, when set. */
   @Column({ type: 'real', nullable: true })
   centerlineY: number | null;
+
+  @Column({ type: 'simple-json', nullable: true })
+  frames: DeckFramesRecord | null;
 
   /** Which way the bow points on the plan; with the centerline it tells port from starboard. */
   @Column({ type: 'varchar', length: 5, default: 'right' })

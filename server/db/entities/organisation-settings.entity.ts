@@ -1,4 +1,5 @@
 import { Column, Entity, PrimaryColumn, UpdateDateColumn, VersionColumn } from 'typeorm';
+import { DEFAULT_RISK_SCALE, type RiskScale } from '../../../shared/calc/abc-risk.js';
 import type { UnitSystem } from '../../../shared/schemas/settings.js';
 
 /** The organisation's settings: a single row with id 1. */
@@ -25,6 +26,10 @@ export class OrganisationSettingsEntity {
   /** How object numbers are written: YYYY and N between separators (shared/calc/object-number.ts). */
   @Column({ type: 'varchar', length: 40, default: 'YYYY.N.N' })
   objectNumberPattern: string;
+
+  /** Anchors of the ABC scales and floors of the priority bands (shared/calc/abc-risk.ts). */
+  @Column({ type: 'simple-json', default: JSON.stringify(DEFAULT_RISK_SCALE) })
+  riskScale: RiskScale;
 
   @UpdateDateColumn({ type: 'datetime' })
   updatedAt: Date;

@@ -1,4 +1,5 @@
-import { In, type EntityManager } from 'typeorm';
+import { In, IsNull, Not, type EntityManager } from 'typeorm';
+import { PRIORITY_BANDS, type RiskScale } from '../../../shared/calc/abc-risk.js';
 import type { RisksQuery } from '../../../shared/schemas/risks.js';
 import { RiskSubjectEntity } from '../entities/risk-subject.entity.js';
 import { RiskEntity } from '../entities/risk.entity.js';
@@ -40,6 +41,24 @@ export class RiskRepository {
 
   save(risk: RiskEntity) {
     return this.repo.save(risk);
+  }
+
+  /** Risks scored from a plain input (years, percent): their scores follow the scale's anchors. */
+  withPlainInputs() {
+    return this.repo.find({ where: [{ yearsBetween: Not(IsNull()) }, { lossPerItemPercent: Not(IsNull()) }, { assetFractionPercent: Not(IsNull()) }] });
+  }
+
+  async setScores(id: number, scores: Pick<RiskEntity, 'a' | 'b' | 'c' | 'magnitude'>) {
+    await this.repo.update({ id }, scores);
+  }
+
+  /** Every risk's band from its MR under the scale's floors: one statement per band. */
+  async rebandAll(scale: RiskScale) {
+    for (const [i, band] of PRIORITY_BANDS.entries()) {
+      const qb = this.repo.createQueryBuilder().update().set({ band }).where('magnitude >= :floor', { floor: scale.bandFloors[band] });
+      if (i > 0) qb.andWhere('magnitude < :ceiling', { ceiling: scale.bandFloors[PRIORITY_BANDS[i - 1]!] });
+      await qb.execute();
+    }
   }
 
   async setDeckOf(subjectType: 'artifact' | 'compartment', subjectId: number, deckId: number | null) {
