@@ -6,6 +6,7 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { HazardVersions1796284659278 } from '../../server/db/migrations/1796284659278-HazardVersions.js';
 import { SearchStemming1796285944020 } from '../../server/db/migrations/1796285944020-SearchStemming.js';
 import { MediaPublicUse1796286347768 } from '../../server/db/migrations/1796286347768-MediaPublicUse.js';
+import { DeckFramesRiskScale1796298366780 } from '../../server/db/migrations/1796298366780-DeckFramesRiskScale.js';
 import { migrations } from '../../server/db/migrations/index.js';
 import { signedInAs } from '../support/http.js';
 import { createTestApp, type TestApp } from '../support/test-app.js';
@@ -25,6 +26,23 @@ async function databaseBefore(migration: (typeof migrations)[number], seed: (db:
 }
 
 describe('migrations', () => {
+  it('DeckFramesRiskScale gives the existing settings row the ABC defaults and keeps its values; decks get no frame numbering', async () => {
+    const dataDir = await databaseBefore(DeckFramesRiskScale1796298366780, async (db) => {
+      await db.query(`INSERT INTO "organisation_settings" ("id", "organisationName", "country", "unitSystem", "version") VALUES (1, 'Harbour Trust', 'GB', 'metric', 4)`);
+      await db.query(`INSERT INTO "vessels" ("id", "name", "vesselType", "version") VALUES (1, 'SS Test Migration', 'Steamship', 1)`);
+      await db.query(`INSERT INTO "decks" ("id", "vesselId", "name", "position", "centerlineY", "version") VALUES (1, 1, 'Main deck', 0, 400, 2)`);
+    });
+    ctx = await createTestApp({}, { dataDir, mail: false });
+    const { client } = await signedInAs(ctx.app, ctx.store, 'curator');
+    expect((await client.get('/api/v1/settings')).body).toMatchObject({
+      organisationName: 'Harbour Trust',
+      unitSystem: 'metric',
+      version: 4,
+      riskScale: { aYearsAtFive: 1, stepFactor: 10, bandFloors: { low: 3, medium: 7.5, high: 9.5, 'very-high': 11.5, extreme: 13.5 } },
+    });
+    expect(await ctx.dataSource.query(`SELECT "centerlineY", "frames", "version" FROM "decks"`)).toEqual([{ centerlineY: 400, frames: null, version: 2 }]);
+  });
+
   it('MediaPublicUse keeps publishable the photos that were (an artifact’s or compartment’s, with alt text), and no others', async () => {
     const dataDir = await databaseBefore(MediaPublicUse1796286347768, async (db) => {
       await db.query(`INSERT INTO "vessels" ("id", "name", "vesselType", "version") VALUES (1, 'SS Test Migration', 'Steamship', 1)`);

@@ -108,3 +108,32 @@ describe('deck filters follow the places', () => {
     expect((await curator.get(`/api/v1/risks?vesselId=${vesselId}&deckId=${lower.id}`)).body.total).toBe(0);
   });
 });
+
+describe('the ABC scale as organisation settings', () => {
+  it('starts at the defaults, refuses bands that do not rise, and re-scores the register when changed', async () => {
+    const admin = (await signedInAs(ctx.app, ctx.store, 'admin')).client;
+    const current = (await curator.get('/api/v1/settings')).body;
+    expect(current.riskScale).toEqual({ aYearsAtFive: 1, stepFactor: 10, bandFloors: { low: 3, medium: 7.5, high: 9.5, 'very-high': 11.5, extreme: 13.5 } });
+    const fromYears = (await conservator.post('/api/v1/risks', { vesselId, statement: 'Damp in the hold', agent: 'water', yearsBetween: 10, b: 3, c: 3 })).body;
+    const direct = (await conservator.post('/api/v1/risks', { vesselId, statement: 'Fire in the galley', agent: 'fire', a: 3, b: 3, c: 2 })).body;
+    expect(fromYears).toMatchObject({ a: 4, magnitude: 10, band: 'high' });
+    expect(direct).toMatchObject({ magnitude: 8, band: 'medium' });
+
+    const bad = await admin.patch('/api/v1/settings', { riskScale: { ...current.riskScale, bandFloors: { ...current.riskScale.bandFloors, high: 7 } }, version: current.version });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields).toEqual({ 'riskScale.bandFloors.high': 'High priority must start above medium priority (MR 7.5): the bands rise from low to extreme.' });
+    expect((await curator.get('/api/v1/settings')).body).toMatchObject({ riskScale: current.riskScale, version: current.version });
+    expect((await curator.patch('/api/v1/settings', { riskScale: current.riskScale, version: current.version })).status).toBe(403);
+
+    const riskScale = { aYearsAtFive: 1, stepFactor: 100, bandFloors: { low: 3, medium: 7, high: 8, 'very-high': 11, extreme: 13 } };
+    const ok = await admin.patch('/api/v1/settings', { riskScale, version: current.version });
+    expect(ok.status, JSON.stringify(ok.body)).toBe(200);
+    expect(ok.body.riskScale).toEqual(riskScale);
+    // Ten years under a factor of 100: 5 − log100(10) = 4.5; MR 10.5 stays high under the new floors (very high starts at 11).
+    expect((await curator.get(`/api/v1/risks/${fromYears.id}`)).body).toMatchObject({ a: 4.5, magnitude: 10.5, band: 'high' });
+    expect((await curator.get(`/api/v1/risks/${direct.id}`)).body).toMatchObject({ a: 3, magnitude: 8, band: 'high' });
+    expect((await curator.get(`/api/v1/risks?vesselId=${vesselId}&band=high`)).body.total).toBe(2);
+    const fresh = await conservator.post('/api/v1/risks', { vesselId, statement: 'Theft', agent: 'thieves-and-vandals', a: 4, b: 4, c: 3 });
+    expect(fresh.body).toMatchObject({ magnitude: 11, band: 'very-high' });
+  });
+});
