@@ -11,6 +11,7 @@ export function presentDeck(deck: DeckEntity, compartmentCount: number, viewer: 
     levelCode: deck.levelCode,
     calibration: deck.calibration && deck.metresPerUnit ? { ...deck.calibration, metresPerUnit: deck.metresPerUnit } : null,
     centerlineY: deck.centerlineY,
+    frames: deck.frames,
     bowTo: deck.bowTo,
     compartmentCount,
     version: deck.version,

@@ -1,3 +1,4 @@
+import { designationErrors } from '../../shared/calc/designation-check.js';
 import { parseNavyDesignation } from '../../shared/calc/designation.js';
 import { POLYGON_PROBLEM_MESSAGES, polygonProblem, type Point } from '../../shared/calc/geometry.js';
 import type { CompartmentsQuery, CreateCompartmentBody, UpdateCompartmentBody } from '../../shared/schemas/compartments.js';
@@ -28,11 +29,14 @@ export class CompartmentService {
   }
 
   /** Checks the designation against the vessel's scheme and its uniqueness; returns the stored form. */
-  private async checkDesignation(repos: Repositories, vessel: VesselEntity, designation: string, exceptId?: number): Promise<string> {
+  private async checkDesignation(repos: Repositories, vessel: VesselEntity, deck: DeckEntity, designation: string, exceptId?: number): Promise<string> {
     let value = designation.trim();
     if (vessel.designationScheme === 'us-navy-1949') {
       const parsed = parseNavyDesignation(value);
       if (!parsed.ok) throw new UnprocessableError(parsed.message, { designation: parsed.message, [`designation.${parsed.part}`]: parsed.message });
+      // The same checks the dialog makes while typing; only errors refuse, warnings are shown with the record.
+      const [error] = designationErrors(parsed.designation, deck);
+      if (error) throw new UnprocessableError(error.message, { designation: error.message, [`designation.${error.part}`]: error.message });
       value = parsed.designation.value;
     }
     const existing = await repos.compartments.findByDesignation(vessel.id, designationKey(value));
@@ -76,7 +80,7 @@ export class CompartmentService {
       const vessel = await repos.vessels.findById(vesselId);
       if (!vessel) throw new NotFoundError('The vessel');
       const deck = await this.deckOf(repos, vessel, body.deckId);
-      const designation = await this.checkDesignation(repos, vessel, body.designation);
+      const designation = await this.checkDesignation(repos, vessel, deck, body.designation);
       this.checkOutline(deck, body.outline);
       const compartment = await repos.compartments.create({ ...body, vesselId, designation, designationKey: designationKey(designation) });
       await recordAudit(repos, actor, {
@@ -102,7 +106,7 @@ export class CompartmentService {
       const vessel = (await repos.vessels.findById(compartment.vesselId))!;
       const { version: _version, ...fields } = body;
       const deck = await this.deckOf(repos, vessel, fields.deckId ?? compartment.deckId);
-      if (fields.designation !== undefined) fields.designation = await this.checkDesignation(repos, vessel, fields.designation, id);
+      if (fields.designation !== undefined) fields.designation = await this.checkDesignation(repos, vessel, deck, fields.designation, id);
       if (fields.outline !== undefined) this.checkOutline(deck, fields.outline);
       else if (fields.deckId !== undefined && fields.deckId !== compartment.deckId) fields.outline = null; // an outline belongs to its deck's plan
       const changes = changesBetween(compartment, fields, EDITABLE);

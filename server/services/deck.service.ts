@@ -51,7 +51,10 @@ export class DeckService {
       if (fields.centerlineY != null && deck.planHeight !== null && fields.centerlineY > deck.planHeight) {
         throw new UnprocessableError('The centerline must lie on the plan.', { centerlineY: `The plan is ${deck.planHeight} units high.` });
       }
-      const changes = changesBetween(deck, { ...fields, ...(position !== undefined && { position }) }, ['name', 'levelCode', 'centerlineY', 'bowTo', 'position']);
+      if (fields.frames && deck.planWidth !== null && fields.frames.referenceX > deck.planWidth) {
+        throw new UnprocessableError('The reference frame must lie on the plan.', { 'frames.referenceX': `The plan is ${deck.planWidth} units wide.` });
+      }
+      const changes = changesBetween(deck, { ...fields, ...(position !== undefined && { position }) }, ['name', 'levelCode', 'centerlineY', 'bowTo', 'frames', 'position']);
       if (!changes) return deck;
       Object.assign(deck, fields);
       if (position !== undefined && position !== deck.position) await this.move(repos, deck, position);

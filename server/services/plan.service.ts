@@ -190,6 +190,7 @@ export class PlanService {
         await repos.artifacts.setPoint(artifact.id, off(point) ? [Math.min(Math.max(point[0], 0), plan.width), Math.min(Math.max(point[1], 0), plan.height)] : point);
       }
       if (deck.centerlineY !== null) deck.centerlineY *= sy;
+      if (deck.frames) deck.frames = { ...deck.frames, referenceX: deck.frames.referenceX * sx };
       if (deck.calibration && deck.metresPerUnit) {
         if (Math.abs(sx / sy - 1) <= SAME_ASPECT) {
           deck.calibration = { ...deck.calibration, a: scale(deck.calibration.a), b: scale(deck.calibration.b) };

@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import { MAX_FRAME_SPACING_METRES } from '../calc/calibration.js';
+import type { DeckGeometry } from '../calc/plan-location.js';
 import { refuseInvalidCharacters, text } from './text.js';
 
 const point = z.tuple([z.number(), z.number()]);
@@ -6,6 +8,19 @@ const levelCode = refuseInvalidCharacters(z.string(), 'Deck number')
   .trim()
   .regex(/^(0[1-9]|[1-9])\d?$/, 'Write the deck as designations do: 1 for the main deck, 2, 3, … below it, 01, 02, … above it.')
   .nullable();
+
+const frameNumber = (label: string) => z.number({ error: `${label} must be a number.` }).int(`${label} is a whole frame number.`).min(0, `${label} cannot be below 0.`).max(999, `${label} is at most 999.`);
+
+/** How the plan's frames are numbered: numbers grow aft from the bow. */
+export const deckFrames = z
+  .object({
+    referenceFrame: frameNumber('The reference frame'),
+    referenceX: z.number({ error: 'Mark where the reference frame is on the plan.' }).min(0, 'The reference frame must lie on the plan.'),
+    spacingMetres: z.number({ error: 'The frame spacing must be a number.' }).positive('The frame spacing must be more than zero.').max(MAX_FRAME_SPACING_METRES, `The frame spacing must be at most ${MAX_FRAME_SPACING_METRES} m.`),
+    lastFrame: frameNumber('The last frame'),
+  })
+  .refine((f) => f.lastFrame >= f.referenceFrame, { message: 'The last frame cannot be forward of the reference frame.', path: ['lastFrame'] })
+  .meta({ id: 'DeckFrames' });
 
 export const deck = z
   .object({
@@ -26,6 +41,7 @@ export const deck = z
       })
       .nullable(),
     centerlineY: z.number().nullable(),
+    frames: deckFrames.nullable(),
     bowTo: z.enum(['right', 'left']),
     compartmentCount: z.number().int(),
     version: z.number().int(),
@@ -39,6 +55,11 @@ export const createDeckBody = z
   .meta({ id: 'CreateDeckBody' });
 export type CreateDeckBody = z.input<typeof createDeckBody>;
 
+/** A deck as the plan-location computations need it. */
+export function deckGeometry(deck: Pick<Deck, 'calibration' | 'centerlineY' | 'bowTo' | 'frames'>): DeckGeometry {
+  return { metresPerUnit: deck.calibration?.metresPerUnit ?? null, centerlineY: deck.centerlineY, bowTo: deck.bowTo, frames: deck.frames };
+}
+
 export const updateDeckBody = z
   .object({
     name: text(80, 'Name'),
@@ -46,6 +67,7 @@ export const updateDeckBody = z
     position: z.number().int().min(0, 'Position starts at 0 (the top deck).'),
     centerlineY: z.number().min(0, 'The centerline must lie on the plan.').nullable(),
     bowTo: z.enum(['right', 'left'], { error: 'The bow points right or left on the plan.' }),
+    frames: deckFrames.nullable(),
     version: z.number().int().min(1),
   })
   .partial()

@@ -177,6 +177,32 @@ describe('compartments', () => {
     expect(fixed.body.designationWarnings).toEqual([]);
   });
 
+  it('checks the designation against the numbered frames of a calibrated plan: beyond the last frame is 422, outside the outline a warning', async () => {
+    const deck = await addDeck('Second deck', '2');
+    // 0.03048 m per unit, frame 0 at x 1900, 24 in between frames (20 units), frames number aft (leftward, bow right) to frame 90.
+    await curator.post(`/api/v1/decks/${deck.id}/calibration`, { method: 'frames', a: [1900, 500], b: [1700, 500], frameSpaces: 10, frameSpacingMetres: 0.6096, version: deck.version });
+    const calibrated = (await curator.get(`/api/v1/decks/${deck.id}`)).body;
+    const badFrames = await curator.patch(`/api/v1/decks/${deck.id}`, { frames: { referenceFrame: 40, referenceX: 1900, spacingMetres: 0.6096, lastFrame: 20 }, version: calibrated.version });
+    expect(badFrames.status).toBe(400);
+    expect(badFrames.body.error.fields).toEqual({ 'frames.lastFrame': 'The last frame cannot be forward of the reference frame.' });
+    const framed = await curator.patch(`/api/v1/decks/${deck.id}`, { centerlineY: 500, frames: { referenceFrame: 0, referenceX: 1900, spacingMetres: 0.6096, lastFrame: 90 }, version: calibrated.version });
+    expect(framed.status, JSON.stringify(framed.body)).toBe(200);
+    expect(framed.body.frames).toEqual({ referenceFrame: 0, referenceX: 1900, spacingMetres: 0.6096, lastFrame: 90 });
+    const outline = [[1100, 520], [700, 520], [700, 650], [1100, 650]]; // frames 40–60, to starboard
+    const beyond = await curator.post(`/api/v1/vessels/${vesselId}/compartments`, { deckId: deck.id, designation: '2-95-1-E', name: 'Boiler room', outline });
+    expect(beyond.status).toBe(422);
+    const message = "Frame 95 is beyond the last frame of Second deck's plan (frame 90).";
+    expect(beyond.body.error).toMatchObject({ message, fields: { designation: message, 'designation.frame': message } });
+    expect((await curator.get(`/api/v1/vessels/${vesselId}/compartments`)).body.total).toBe(0);
+    const off = await curator.post(`/api/v1/vessels/${vesselId}/compartments`, { deckId: deck.id, designation: '2-70-1-E', name: 'Boiler room', outline });
+    expect(off.status).toBe(201);
+    expect(off.body.designationWarnings).toEqual(['The designation says frame 70, but the outline spans frames 40–60; designations use the foremost, 40.']);
+    const stillBeyond = await curator.patch(`/api/v1/compartments/${off.body.id}`, { designation: '2-91-1-E', version: off.body.version });
+    expect(stillBeyond.status).toBe(422);
+    const fixed = await curator.patch(`/api/v1/compartments/${off.body.id}`, { designation: '2-40-1-E', version: off.body.version });
+    expect(fixed.body.designationWarnings).toEqual([]);
+  });
+
   it('filters by deck, access and hazard; records every change in the audit trail', async () => {
     const conservator = (await signedInAs(ctx.app, ctx.store, 'conservator')).client;
     const upper = await addDeck('Main deck', '1');

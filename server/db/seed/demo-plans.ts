@@ -12,6 +12,8 @@ export const CENTERLINE_Y = 500;
 /** Frames are 24 in apart (demo figure) and drawn 20 px apart: 0.6096 m / 20 px. */
 export const FRAME_SPACING_METRES = 0.6096;
 const FRAME_PX = 20;
+/** The aftmost frame drawn on the demo plans. */
+export const DEMO_LAST_FRAME = 140;
 const BOW_X = 3000;
 const HALF_BEAM = 180;
 
@@ -53,7 +55,7 @@ export function drawDeckPlan(title: string, compartments: DemoCompartment[]): Pr
   const sternX = frameX(145);
   const hull = `M ${sternX + 60} ${CENTERLINE_Y - HALF_BEAM} L ${frameX(12)} ${CENTERLINE_Y - HALF_BEAM} Q ${BOW_X + 40} ${CENTERLINE_Y - HALF_BEAM + 20} ${BOW_X + 110} ${CENTERLINE_Y} Q ${BOW_X + 40} ${CENTERLINE_Y + HALF_BEAM - 20} ${frameX(12)} ${CENTERLINE_Y + HALF_BEAM} L ${sternX + 60} ${CENTERLINE_Y + HALF_BEAM} Q ${sternX - 40} ${CENTERLINE_Y} ${sternX + 60} ${CENTERLINE_Y - HALF_BEAM} Z`;
   const frames: string[] = [];
-  for (let f = 0; f <= 140; f += 2) {
+  for (let f = 0; f <= DEMO_LAST_FRAME; f += 2) {
     const x = frameX(f);
     const major = f % 10 === 0;
     frames.push(`<line x1="${x}" y1="${CENTERLINE_Y - HALF_BEAM - (major ? 40 : 15)}" x2="${x}" y2="${CENTERLINE_Y - HALF_BEAM}" stroke="#6b7f8c" stroke-width="${major ? 2 : 1}"/>`);

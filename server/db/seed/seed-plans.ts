@@ -6,7 +6,7 @@ import { PlanService } from '../../services/plan.service.js';
 import { FileStore } from '../../storage/file-store.js';
 import { Store } from '../store.js';
 import { DEMO_COMPARTMENTS, DEMO_DECKS } from './demo-ship-map.js';
-import { CENTERLINE_Y, demoOutline, drawDeckPlan, FRAME_SPACING_METRES, frameX } from './demo-plans.js';
+import { CENTERLINE_Y, DEMO_LAST_FRAME, demoOutline, drawDeckPlan, FRAME_SPACING_METRES, frameX } from './demo-plans.js';
 
 /**
  * Draws and tiles a plan for each deck of the demo ship, calibrates it from its frames, and
@@ -37,6 +37,7 @@ export async function seedDemoPlans(dataSource: DataSource, config: Config): Pro
       fresh.calibration = { method: 'frames', a, b, realMetres: 100 * FRAME_SPACING_METRES, frameSpaces: 100, frameSpacingMetres: FRAME_SPACING_METRES };
       fresh.metresPerUnit = (100 * FRAME_SPACING_METRES) / (b[0] - a[0] === 0 ? 1 : Math.abs(b[0] - a[0]));
       fresh.centerlineY = CENTERLINE_Y;
+      fresh.frames = { referenceFrame: 0, referenceX: frameX(0), spacingMetres: FRAME_SPACING_METRES, lastFrame: DEMO_LAST_FRAME };
       fresh.bowTo = 'right';
       await repos.decks.save(fresh);
       for (const room of rooms) {
