@@ -6,7 +6,10 @@ import type { ConditionReport, ConditionReportSummary, Finding } from '../../sha
 import type { ConditionFindingEntity } from '../db/entities/condition-finding.entity.js';
 import type { ConditionReportEntity } from '../db/entities/condition-report.entity.js';
 
-export function presentFinding(finding: ConditionFindingEntity): Finding {
+/** Says where a finding is in words (see shared/calc/plan-location.ts). */
+export type LocateFinding = (finding: ConditionFindingEntity) => string | null;
+
+export function presentFinding(finding: ConditionFindingEntity, locate: LocateFinding): Finding {
   return {
     id: finding.id,
     reportId: finding.reportId,
@@ -15,6 +18,7 @@ export function presentFinding(finding: ConditionFindingEntity): Finding {
     agent: finding.agent,
     damageType: finding.damageType,
     location: finding.location,
+    locationText: locate(finding),
     extentPercent: finding.extentPercent,
     severity: finding.severity,
     percentRusted: finding.percentRusted,
@@ -52,7 +56,7 @@ export function presentReportSummary(report: ConditionReportEntity, subjectLabel
   };
 }
 
-export function presentReport(report: ConditionReportEntity, subjectLabel: string, supersededById: number | null, findings: ConditionFindingEntity[], amendmentId: number | null, viewer: Express.User, hazardKinds: readonly HazardKind[] = [], openedByIncidentId: number | null = null): ConditionReport {
+export function presentReport(report: ConditionReportEntity, subjectLabel: string, supersededById: number | null, findings: ConditionFindingEntity[], amendmentId: number | null, viewer: Express.User, hazardKinds: readonly HazardKind[] = [], openedByIncidentId: number | null = null, locate: LocateFinding = () => null): ConditionReport {
   const draft = report.status === 'draft';
   const readFindings = can(viewer.role, 'conditionReport', 'readFindings');
   return {
@@ -63,7 +67,7 @@ export function presentReport(report: ConditionReportEntity, subjectLabel: strin
     gradeBecause: readFindings ? gradeFromFindings(findings).because : null,
     gradeOverride: report.gradeOverride,
     overrideReason: readFindings ? report.overrideReason : null,
-    findings: readFindings ? findings.map(presentFinding) : null,
+    findings: readFindings ? findings.map((f) => presentFinding(f, locate)) : null,
     subjectHazards: cautionsFor(hazardKinds),
     openedByIncidentId,
     version: report.version,

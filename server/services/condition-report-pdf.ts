@@ -18,6 +18,8 @@ export interface ReportPdfInput {
   surveyorName: string | null;
   supersededById: number | null;
   findings: ConditionFindingEntity[];
+  /** Each finding's location in words (frame and offset, or the photo marked). */
+  locate: (finding: ConditionFindingEntity) => string | null;
   photos: PdfPhoto[];
   /** The hazards recorded where the subject is. */
   hazards: readonly HazardKind[];
@@ -61,6 +63,8 @@ export async function conditionReportPdf(input: ReportPdfInput): Promise<Buffer>
     doc.font('Body').fontSize(9.5);
     field('Agent of deterioration', AGENT_LABELS[f.agent]);
     if (f.artifact) field('Artifact', `${f.artifact.objectNumber} ${f.artifact.name}`);
+    const where = input.locate(f);
+    if (where) field('Location', where);
     if (f.extentPercent !== null) field('Extent', `${f.extentPercent} % of the surface or object`);
     if (f.percentRusted !== null) {
       const grade = rustGrade(f.percentRusted, f.rustDistribution);

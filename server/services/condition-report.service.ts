@@ -1,13 +1,14 @@
 import { gradeFromFindings } from '../../shared/calc/condition-grade.js';
 import { can } from '../../shared/permissions.js';
 import { rustGrade } from '../../shared/calc/rust-grade.js';
+import { findingLocationText } from '../../shared/calc/plan-location.js';
 import { AGENT_LABELS, DAMAGE_TYPES, PERCENT_FIELDS, RUST_DAMAGE_TYPES, type ConditionReportsQuery, type UpdateConditionReportBody, type UpdateFindingBody, type createConditionReportBody, type createFindingBody } from '../../shared/schemas/condition.js';
 import type { z } from 'zod';
 import type { ConditionFindingEntity } from '../db/entities/condition-finding.entity.js';
 import type { ConditionReportEntity } from '../db/entities/condition-report.entity.js';
 import type { Repositories, Store } from '../db/store.js';
 import { ConflictError, NotFoundError, UnprocessableError } from '../http/errors.js';
-import { presentReport, presentReportSummary } from '../presenters/condition-report.presenter.js';
+import { presentReport, presentReportSummary, type LocateFinding } from '../presenters/condition-report.presenter.js';
 import { mediaUrl } from '../presenters/media.presenter.js';
 import { conditionReportDocument } from '../search/condition-report-document.js';
 import { changesBetween, recordAudit, type Actor } from './audit.service.js';
@@ -61,6 +62,20 @@ export class ConditionReportService {
     return { vesselId: compartment.vesselId, label: `${compartment.designation} ${compartment.name}`, compartmentId: compartment.id };
   }
 
+  /** Says where each finding is: plan points on the deck of the subject's compartment, in the organisation's units. */
+  private async locator(repos: Repositories, compartmentId: number | null, findings: ConditionFindingEntity[]): Promise<LocateFinding> {
+    const compartment = compartmentId === null ? null : await repos.compartments.findById(compartmentId);
+    const deck = compartment ? await repos.decks.findById(compartment.deckId) : null;
+    const { unitSystem } = await repos.settings.get();
+    const names = new Map<number, string | null>();
+    for (const f of findings) {
+      if (f.location?.on !== 'photo' || names.has(f.location.mediaId)) continue;
+      const media = await repos.media.findById(f.location.mediaId);
+      names.set(f.location.mediaId, media?.caption || media?.altText || null);
+    }
+    return (f) => findingLocationText(f.location, deck, unitSystem, (id) => names.get(id) ?? null);
+  }
+
   private async supersededBy(repos: Repositories, id: number): Promise<number | null> {
     const next = await repos.conditionReports.amendmentOf(id);
     return next?.status === 'submitted' ? next.id : null;
@@ -73,7 +88,8 @@ export class ConditionReportService {
     const [subject, findings, amendment] = [await this.subjectOf(repos, report.subjectType, report.subjectId), await repos.conditionReports.findings(id), await repos.conditionReports.amendmentOf(id)];
     const hazards = subject.compartmentId === null ? [] : ((await repos.hazards.kindsFor([subject.compartmentId])).get(subject.compartmentId) ?? []);
     const opener = (await repos.incidents.forSubject(report.subjectType, report.subjectId)).find((i) => i.reportIds.includes(report.id));
-    return presentReport(report, subject.label, amendment?.status === 'submitted' ? amendment.id : null, findings, amendment?.id ?? null, viewer, hazards, opener?.id ?? null);
+    const locate = await this.locator(repos, subject.compartmentId, findings);
+    return presentReport(report, subject.label, amendment?.status === 'submitted' ? amendment.id : null, findings, amendment?.id ?? null, viewer, hazards, opener?.id ?? null, locate);
   }
 
   /** Recomputes the grade and counts from the findings, saves the report and its search document. */
@@ -129,6 +145,7 @@ export class ConditionReportService {
       surveyorName: report.surveyor?.name ?? null,
       supersededById: await this.supersededBy(repos, id),
       findings,
+      locate: await this.locator(repos, subject.compartmentId, findings),
       photos,
       hazards: subject.compartmentId === null ? [] : ((await repos.hazards.kindsFor([subject.compartmentId])).get(subject.compartmentId) ?? []),
     });

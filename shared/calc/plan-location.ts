@@ -103,3 +103,26 @@ export function outlineSide(outline: readonly Point[], deck: Pick<DeckGeometry, 
   if (ys.every((y) => (starboardIsBelow ? y <= c : y >= c))) return 'port';
   return 'centerline';
 }
+
+/** Where on a photo a marked area sits, in words: "upper left", "centre", … */
+function areaPlace([x, y, w, h]: readonly [number, number, number, number]): string {
+  const cx = x + w / 2;
+  const cy = y + h / 2;
+  if (w >= 0.9 && h >= 0.9) return 'the whole photo';
+  const across = cx < 1 / 3 ? 'left' : cx > 2 / 3 ? 'right' : '';
+  const down = cy < 1 / 3 ? 'upper' : cy > 2 / 3 ? 'lower' : '';
+  return [down, across].filter(Boolean).join(' ') || 'centre';
+}
+
+export type MarkedLocation = { on: 'plan'; point: Point } | { on: 'photo'; mediaId: number; area: readonly [number, number, number, number] };
+
+/**
+ * A finding's location as a sentence for the report page and its PDF: a plan point as frame and
+ * offset ("Frame 64, 2.1 m to port"), a photo mark by the photo's caption and the part of it marked.
+ */
+export function findingLocationText(location: MarkedLocation | null, deck: DeckGeometry | null, units: UnitSystem, photoName: (mediaId: number) => string | null): string | null {
+  if (!location) return null;
+  if (location.on === 'plan') return deck ? describePlanPoint(location.point, deck, units) : 'Marked on the deck plan.';
+  const name = photoName(location.mediaId);
+  return `Marked on ${name ? `the photo “${name}”` : 'a photo'}: ${areaPlace(location.area)}`;
+}

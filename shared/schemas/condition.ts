@@ -108,6 +108,8 @@ export const finding = z
     agent: z.enum(AGENTS),
     damageType: z.enum(DAMAGE_TYPE_KEYS),
     location: findingLocation.nullable(),
+    /** The location in words: frame and offset from the centerline for a plan point, the photo and part of it for a mark. */
+    locationText: z.string().nullable(),
     extentPercent: z.number().nullable(),
     severity: z.enum(SEVERITIES),
     percentRusted: z.number().nullable(),

@@ -188,7 +188,21 @@ describe('the report as a PDF', () => {
     const photo = (await conservator.agent.post(`/api/v1/media?ownerType=condition-report&ownerId=${report.id}`).set('x-csrf-token', conservator.csrf).attach('file', await cameraJpeg(), 'deckhead.jpg')).body;
     await conservator.patch(`/api/v1/media/${photo.id}`, { caption: 'Deckhead over the store', version: photo.version });
     await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { ...coating, location: { on: 'photo', mediaId: photo.id, area: [0.1, 0.1, 0.2, 0.2] } });
-    const last = await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { artifactId: gaugeId, agent: 'thieves-and-vandals', damageType: 'graffiti', severity: 'slight', description: 'Initials scratched in the paint' });
+    const last = await conservator.post(`/api/v1/condition-reports/${report.id}/findings`, { artifactId: gaugeId, agent: 'thieves-and-vandals', damageType: 'graffiti', severity: 'slight', description: 'Initials scratched in the paint', location: { on: 'plan', point: [360, 458] } });
+    expect(last.body.findings.map((f: { locationText: string | null }) => f.locationText)).toEqual([
+      'Marked on the photo “Deckhead over the store”: upper left',
+      'Marked on the plan; the deck is not calibrated, so no frame or offset can be given.',
+    ]);
+    // Calibrated at 0.05 m a unit, frame 0 at x 1000 and 0.5 m between frames (10 units), numbered leftward (bow right):
+    // x 360 is frame (1000 − 360) / 10 = 64; y 458 is 42 units × 0.05 = 2.1 m above the centerline at 500, to port.
+    const deck = (await ctx.store.repos.decks.findById(place.deckId))!;
+    Object.assign(deck, { metresPerUnit: 0.05, centerlineY: 500, bowTo: 'right', frames: { referenceFrame: 0, referenceX: 1000, spacingMetres: 0.5, lastFrame: 90 } });
+    await ctx.store.repos.decks.save(deck);
+    // In the organisation's units: US customary by default (2.1 m = 82.7 in, to the nearest inch 6 ft 11 in), then metric.
+    expect((await curator.get(`/api/v1/condition-reports/${report.id}`)).body.findings[1].locationText).toBe('Frame 64, 6′ 11″ to port');
+    const settings = await ctx.store.repos.settings.get();
+    await ctx.store.repos.settings.save(Object.assign(settings, { unitSystem: 'metric' }));
+    expect((await curator.get(`/api/v1/condition-reports/${report.id}`)).body.findings[1].locationText).toBe('Frame 64, 2.1 m to port');
     await curator.post(`/api/v1/condition-reports/${report.id}/submit`, { version: last.body.version });
 
     const res = await curator.getBytes(`/api/v1/condition-reports/${report.id}/pdf`);
@@ -206,6 +220,8 @@ describe('the report as a PDF', () => {
     expect(flat).toContain('Recommended action: Spot-prime and overcoat');
     expect(flat).toContain('2. Graffiti: Slight');
     expect(flat).toContain('Artifact: 2019.4.12 Steam gauge');
+    expect(flat).toContain('Location: Frame 64, 2.1 m to port');
+    expect(flat).toContain('Location: Marked on the photo “Deckhead over the store”: upper left');
     expect(flat).toContain('Deckhead over the store');
     expect(flat).toMatch(/Submitted and signed by Test curator \d+/);
 

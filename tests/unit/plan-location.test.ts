@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { designationErrors, designationWarnings, suggestDesignation, type DeckPlacement } from '../../shared/calc/designation-check.js';
 import { parseNavyDesignation, type ParsedDesignation } from '../../shared/calc/designation.js';
-import { centerlineOffset, describePlanPoint, frameAt, outlineFrames, type DeckGeometry } from '../../shared/calc/plan-location.js';
+import { centerlineOffset, describePlanPoint, findingLocationText, frameAt, outlineFrames, type DeckGeometry } from '../../shared/calc/plan-location.js';
 
 // Hand-computed: frames 24 in (0.6096 m) apart drawn 20 px apart, so one pixel is 0.03048 m;
 // frame 0 at x = 3000 with the bow to the right (frames number aft, leftward); centerline y = 500.
@@ -75,5 +75,15 @@ describe('a designation checked against its outline', () => {
     expect(suggestDesignation('2-40-5-E', second, starboardRoom)).toBeNull(); // already right: 5 is the third compartment to starboard
     expect(suggestDesignation('2-44-0-L', second, [[2200, 400], [1800, 400], [1800, 600]])).toBe('2-40-0-L');
     expect(suggestDesignation('2-40-1-E', { ...second, levelCode: null, centerlineY: null, frames: null }, starboardRoom)).toBeNull();
+  });
+});
+
+describe('a finding location in words', () => {
+  it('states a plan point as frame and offset, and a photo mark by caption and place', () => {
+    const name = (id: number) => (id === 7 ? 'Boiler front, port side' : null);
+    expect(findingLocationText({ on: 'plan', point: [1720, 431.1] }, deck, 'metric', name)).toBe('Frame 64, 2.1 m to port');
+    expect(findingLocationText({ on: 'photo', mediaId: 7, area: [0.05, 0.1, 0.2, 0.2] }, deck, 'metric', name)).toBe('Marked on the photo “Boiler front, port side”: upper left');
+    expect(findingLocationText({ on: 'photo', mediaId: 8, area: [0.35, 0.35, 0.3, 0.3] }, deck, 'metric', name)).toBe('Marked on a photo: centre');
+    expect(findingLocationText(null, deck, 'metric', name)).toBeNull();
   });
 });
