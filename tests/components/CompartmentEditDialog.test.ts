@@ -86,3 +86,48 @@ describe('CompartmentEditDialog designation hints', () => {
     expect(page.find('#compartment-designation-error').text()).toBe("Frame 150 is beyond the last frame of Second deck's plan (frame 140).");
   });
 });
+
+describe('CompartmentFramesDialog', () => {
+  it('numbers the frames from the forward end of the outline, the spacing in feet and inches and the last frame', async () => {
+    const { default: CompartmentFramesDialog } = await import('@/components/CompartmentFramesDialog.vue');
+    const sent: unknown[] = [];
+    vi.stubGlobal(
+      'fetch',
+      vi.fn((input: string | URL | Request, init?: RequestInit) => {
+        const path = String(input);
+        if (path.endsWith('/auth/csrf')) return Promise.resolve(json(200, { csrfToken: 'token' }));
+        if (path.endsWith('/decks/4') && init?.method === 'PATCH') {
+          sent.push(JSON.parse(String(init.body)));
+          return Promise.resolve(json(200, deck));
+        }
+        return Promise.reject(new Error(`unexpected request ${path}`));
+      }),
+    );
+    mount(CompartmentFramesDialog, {
+      props: { visible: true, deck: { ...deck, frames: null }, outline, units: 'us-customary' },
+      global: { plugins: [createPinia(), PiniaColada, [PrimeVue, { unstyled: true }]] },
+      attachTo: document.body,
+    });
+    await flushPromises();
+    const page = new DOMWrapper(document.body);
+    // The spacing comes from the calibration, 0.6096 m, written as 2 ft.
+    expect(page.find<HTMLInputElement>('#frames-spacing').element.value).toBe("2'");
+    await page.find('form').trigger('submit');
+    await flushPromises();
+    expect(page.text()).toContain('Give the frame at the forward end of the outline.');
+    expect(sent).toEqual([]);
+
+    const forward = page.find<HTMLInputElement>('#frames-forward');
+    await forward.setValue('40');
+    await forward.trigger('input');
+    await forward.trigger('blur');
+    const last = page.find<HTMLInputElement>('#frames-last');
+    await last.setValue('140');
+    await last.trigger('input');
+    await last.trigger('blur');
+    await page.find('form').trigger('submit');
+    await flushPromises();
+    // Bow to the right: the forward end is the outline's largest x, 2200.
+    expect(sent).toEqual([{ frames: { referenceFrame: 40, referenceX: 2200, spacingMetres: 0.6096, lastFrame: 140 }, version: 3 }]);
+  });
+});
