@@ -42,7 +42,8 @@ export function designationWarnings(designation: ParsedDesignation, deck: DeckPl
   }
   const frames = outlineFrames(outline, deck);
   const frame = designation.frame.number;
-  if (frames && (frame < frames.foremost || frame > frames.aftmost)) {
+  const beyondPlan = designationErrors(designation, deck).length > 0;
+  if (frames && !beyondPlan && (frame < frames.foremost || frame > frames.aftmost)) {
     warnings.push(`The designation says frame ${frame}, but the outline spans frames ${frames.foremost}–${frames.aftmost}; designations use the foremost, ${frames.foremost}.`);
   }
   return warnings;

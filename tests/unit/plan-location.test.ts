@@ -66,6 +66,8 @@ describe('a designation checked against its outline', () => {
   it('refuses a frame beyond the plan’s last frame', () => {
     expect(designationErrors(parsed('2-141-1-E'), second)).toEqual([{ part: 'frame', message: "Frame 141 is beyond the last frame of Second deck's plan (frame 140)." }]);
     expect(designationErrors(parsed('2-140-1-E'), second)).toEqual([]);
+    // The error says it all: no second word about the outline's frames.
+    expect(designationWarnings(parsed('2-141-1-E'), second, starboardRoom)).toEqual([]);
     expect(designationErrors(parsed('2-141-1-E'), { ...second, metresPerUnit: null })).toEqual([]);
   });
 
