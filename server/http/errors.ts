@@ -67,3 +67,10 @@ export class RateLimitedError extends ApiError {
     super(429, 'rate_limited', message, undefined, retryAfterSeconds);
   }
 }
+
+/** A story document with a node or mark the editor does not make, or that cannot be rendered. */
+export class InvalidRichTextError extends ApiError {
+  constructor(field: string, message: string) {
+    super(422, 'invalid_rich_text', message, { [field]: message });
+  }
+}

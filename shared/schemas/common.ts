@@ -44,6 +44,7 @@ export const ERROR_CODES = [
   'unsupported_media_type',
   'unprocessable',
   'invalid_characters',
+  'invalid_rich_text',
   'malformed_upload',
   'rate_limited',
   'internal',
