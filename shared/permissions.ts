@@ -30,6 +30,10 @@ export const PERMISSIONS = {
   risk: { read: STAFF, create: CONSERVATOR, update: CONSERVATOR, delete: CONSERVATOR },
   /** Docents find damage on tours and log it; a conservator or curator completes the record. */
   incident: { read: STAFF, create: ['conservator', 'curator', 'docent'], update: ['conservator', 'curator'] },
+  /** The public appeal of a repair project: fundraisers run it, curators may edit it too. */
+  appeal: { read: STAFF, update: ['fundraiser', 'curator', 'admin'] },
+  /** Gifts: donors' e-mail addresses, refunds and exports are for fundraisers and administrators only. */
+  donation: { read: ['fundraiser', 'admin', 'curator'], readDonor: ['fundraiser', 'admin'], refund: ['fundraiser', 'admin'], export: ['fundraiser', 'admin'] },
   media: { read: STAFF, create: ['curator', 'conservator', 'docent'], update: ['curator', 'conservator'], delete: ['curator', 'conservator'] },
 } as const satisfies Record<string, Record<string, readonly Role[]>>;
 

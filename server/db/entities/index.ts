@@ -1,3 +1,7 @@
+import { AppealMonthTotalEntity } from './appeal-month-total.entity.js';
+import { AppealEntity } from './appeal.entity.js';
+import { DonationEntity } from './donation.entity.js';
+import { StripeEventEntity } from './stripe-event.entity.js';
 import { ArtifactMoveEntity } from './artifact-move.entity.js';
 import { ArtifactEntity } from './artifact.entity.js';
 import { ConditionFindingEntity } from './condition-finding.entity.js';
@@ -19,6 +23,6 @@ import { SessionEntity } from './session.entity.js';
 import { UserEntity } from './user.entity.js';
 import { VesselEntity } from './vessel.entity.js';
 
-export { RiskEntity, RiskSubjectEntity, IncidentEntity, IncidentSubjectEntity, ConditionReportEntity, ConditionFindingEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, AuditEventEntity, CompartmentEntity, DeckEntity, HazardEntity, InvitationEntity, OrganisationSettingsEntity, PasswordResetEntity, PlanEntity, SessionEntity, UserEntity, VesselEntity };
+export { AppealEntity, AppealMonthTotalEntity, DonationEntity, StripeEventEntity, RiskEntity, RiskSubjectEntity, IncidentEntity, IncidentSubjectEntity, ConditionReportEntity, ConditionFindingEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, AuditEventEntity, CompartmentEntity, DeckEntity, HazardEntity, InvitationEntity, OrganisationSettingsEntity, PasswordResetEntity, PlanEntity, SessionEntity, UserEntity, VesselEntity };
 
-export const entities = [UserEntity, VesselEntity, OrganisationSettingsEntity, AuditEventEntity, SessionEntity, InvitationEntity, PasswordResetEntity, DeckEntity, CompartmentEntity, HazardEntity, PlanEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, ConditionReportEntity, ConditionFindingEntity, IncidentEntity, IncidentSubjectEntity, RiskEntity, RiskSubjectEntity];
+export const entities = [UserEntity, VesselEntity, OrganisationSettingsEntity, AuditEventEntity, SessionEntity, InvitationEntity, PasswordResetEntity, DeckEntity, CompartmentEntity, HazardEntity, PlanEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, ConditionReportEntity, ConditionFindingEntity, IncidentEntity, IncidentSubjectEntity, RiskEntity, RiskSubjectEntity, AppealEntity, DonationEntity, StripeEventEntity, AppealMonthTotalEntity];
