@@ -1,4 +1,6 @@
 import type { DataSource, EntityManager } from 'typeorm';
+import { AppealRepository } from './repositories/appeal.repository.js';
+import { DonationRepository } from './repositories/donation.repository.js';
 import { ArtifactMoveRepository } from './repositories/artifact-move.repository.js';
 import { ArtifactRepository } from './repositories/artifact.repository.js';
 import { ConditionReportRepository } from './repositories/condition-report.repository.js';
@@ -36,6 +38,8 @@ export interface Repositories {
   conditionReports: ConditionReportRepository;
   incidents: IncidentRepository;
   risks: RiskRepository;
+  appeals: AppealRepository;
+  donations: DonationRepository;
 }
 
 function repositories(manager: EntityManager): Repositories {
@@ -57,6 +61,8 @@ function repositories(manager: EntityManager): Repositories {
     conditionReports: new ConditionReportRepository(manager),
     incidents: new IncidentRepository(manager),
     risks: new RiskRepository(manager),
+    appeals: new AppealRepository(manager),
+    donations: new DonationRepository(manager),
   };
 }
 
