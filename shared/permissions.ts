@@ -30,6 +30,9 @@ export const PERMISSIONS = {
   risk: { read: STAFF, create: CONSERVATOR, update: CONSERVATOR, delete: CONSERVATOR },
   /** Docents find damage on tours and log it; a conservator or curator completes the record. */
   incident: { read: STAFF, create: ['conservator', 'curator', 'docent'], update: ['conservator', 'curator'] },
+  /** Approving is the curator's alone: the service refuses a conservator's approval (changeStatus covers the other steps). */
+  repairProject: { read: STAFF, create: ['curator', 'conservator'], update: ['curator', 'conservator'], changeStatus: ['curator', 'conservator'] },
+  treatment: { read: STAFF, create: ['conservator', 'curator'], update: ['conservator', 'curator'] },
   /** The public appeal of a repair project: fundraisers run it, curators may edit it too. */
   appeal: { read: STAFF, update: ['fundraiser', 'curator', 'admin'] },
   /** Gifts: donors' e-mail addresses, refunds and exports are for fundraisers and administrators only. */

@@ -65,6 +65,14 @@ const MATRIX: Record<string, Record<Role, boolean>> = {
   'incident.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
   'incident.create': { admin: false, curator: true, conservator: true, docent: true, fundraiser: false },
   'incident.update': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
+  // Repairs: curators and conservators plan them (approving is the curator's, in the service); fundraisers and all staff read.
+  'repairProject.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
+  'repairProject.create': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
+  'repairProject.update': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
+  'repairProject.changeStatus': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
+  'treatment.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
+  'treatment.create': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
+  'treatment.update': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
   // Files: curators and conservators, further limited to records their role may change (media.presenter.ts).
   'media.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
   'media.create': { admin: false, curator: true, conservator: true, docent: true, fundraiser: false },

@@ -1,5 +1,6 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, VersionColumn, type Relation } from 'typeorm';
 import type { RichTextDoc } from '../../../shared/schemas/rich-text.js';
+import { RepairProjectEntity } from './repair-project.entity.js';
 import { VesselEntity } from './vessel.entity.js';
 
 export interface AppealPhoto {
@@ -27,6 +28,10 @@ export class AppealEntity {
   @Index({ unique: true })
   @Column({ type: 'integer' })
   repairProjectId: number;
+
+  @ManyToOne(() => RepairProjectEntity, { onDelete: 'RESTRICT' })
+  @JoinColumn({ name: 'repairProjectId' })
+  repairProject: Relation<RepairProjectEntity>;
 
   @Column({ type: 'simple-json', nullable: true })
   storyDoc: RichTextDoc | null;

@@ -1,7 +1,7 @@
 import { MigrationInterface, QueryRunner } from "typeorm";
 
-export class Giving1796410146307 implements MigrationInterface {
-    name = 'Giving1796410146307'
+export class Giving1796410465930 implements MigrationInterface {
+    name = 'Giving1796410465930'
 
     public async up(queryRunner: QueryRunner): Promise<void> {
         await queryRunner.query(`CREATE TABLE "appeal_month_totals" ("appealId" integer NOT NULL, "month" varchar(7) NOT NULL, "raisedCents" integer NOT NULL DEFAULT (0), "refundedCents" integer NOT NULL DEFAULT (0), "giftCount" integer NOT NULL DEFAULT (0), PRIMARY KEY ("appealId", "month"))`);
@@ -15,7 +15,7 @@ export class Giving1796410146307 implements MigrationInterface {
         await queryRunner.query(`CREATE INDEX "IDX_43a71045572937b363233cd04e" ON "donations" ("appealId", "createdAt") `);
         await queryRunner.query(`CREATE TABLE "stripe_events" ("id" varchar(255) PRIMARY KEY NOT NULL, "type" varchar(100) NOT NULL, "donationId" integer, "processedAt" datetime NOT NULL)`);
         await queryRunner.query(`DROP INDEX "IDX_3369659e815b8e05edf43f1297"`);
-        await queryRunner.query(`CREATE TABLE "temporary_appeals" ("id" integer PRIMARY KEY AUTOINCREMENT NOT NULL, "vesselId" integer NOT NULL, "repairProjectId" integer NOT NULL, "storyDoc" text, "storyHtml" text NOT NULL DEFAULT (''), "storyText" text NOT NULL DEFAULT (''), "goalCents" integer NOT NULL, "photos" text NOT NULL, "publishedAt" datetime, "raisedCents" integer NOT NULL DEFAULT (0), "refundedCents" integer NOT NULL DEFAULT (0), "giftCount" integer NOT NULL DEFAULT (0), "createdAt" datetime NOT NULL DEFAULT (datetime('now')), "updatedAt" datetime NOT NULL DEFAULT (datetime('now')), "version" integer NOT NULL, CONSTRAINT "FK_38b632088a8cfb77019d81b9151" FOREIGN KEY ("vesselId") REFERENCES "vessels" ("id") ON DELETE CASCADE ON UPDATE NO ACTION)`);
+        await queryRunner.query(`CREATE TABLE "temporary_appeals" ("id" integer PRIMARY KEY AUTOINCREMENT NOT NULL, "vesselId" integer NOT NULL, "repairProjectId" integer NOT NULL, "storyDoc" text, "storyHtml" text NOT NULL DEFAULT (''), "storyText" text NOT NULL DEFAULT (''), "goalCents" integer NOT NULL, "photos" text NOT NULL, "publishedAt" datetime, "raisedCents" integer NOT NULL DEFAULT (0), "refundedCents" integer NOT NULL DEFAULT (0), "giftCount" integer NOT NULL DEFAULT (0), "createdAt" datetime NOT NULL DEFAULT (datetime('now')), "updatedAt" datetime NOT NULL DEFAULT (datetime('now')), "version" integer NOT NULL, CONSTRAINT "FK_38b632088a8cfb77019d81b9151" FOREIGN KEY ("vesselId") REFERENCES "vessels" ("id") ON DELETE CASCADE ON UPDATE NO ACTION, CONSTRAINT "FK_3369659e815b8e05edf43f1297a" FOREIGN KEY ("repairProjectId") REFERENCES "repair_project" ("id") ON DELETE RESTRICT ON UPDATE NO ACTION)`);
         await queryRunner.query(`INSERT INTO "temporary_appeals"("id", "vesselId", "repairProjectId", "storyDoc", "storyHtml", "storyText", "goalCents", "photos", "publishedAt", "raisedCents", "refundedCents", "giftCount", "createdAt", "updatedAt", "version") SELECT "id", "vesselId", "repairProjectId", "storyDoc", "storyHtml", "storyText", "goalCents", "photos", "publishedAt", "raisedCents", "refundedCents", "giftCount", "createdAt", "updatedAt", "version" FROM "appeals"`);
         await queryRunner.query(`DROP TABLE "appeals"`);
         await queryRunner.query(`ALTER TABLE "temporary_appeals" RENAME TO "appeals"`);
