@@ -58,8 +58,10 @@ export class AppealService {
     return presentAppeal(saved, project, viewer);
   }
 
+  /** Each repair project of the vessel with its appeal, or an empty draft where none is written. */
   async ofVessel(vesselId: number, viewer: Express.User) {
-    const rows = await this.store.repos.appeals.ofVessel(vesselId);
-    return rows.map(({ appeal, project }) => presentAppeal(appeal, project, viewer));
+    const [projects, rows] = await Promise.all([this.store.repos.appeals.projectsOfVessel(vesselId), this.store.repos.appeals.ofVessel(vesselId)]);
+    const byProject = new Map(rows.map(({ appeal }) => [appeal.repairProjectId, appeal]));
+    return projects.filter((p) => p.status !== 'cancelled').map((project) => presentAppeal(byProject.get(project.id) ?? null, project, viewer));
   }
 }

@@ -70,7 +70,7 @@ export const donation = z
   .meta({ id: 'Donation' });
 export type Donation = z.infer<typeof donation>;
 
-const dateOnly = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date as YYYY-MM-DD.');
+const dateOnly = z.iso.date('Use a date as YYYY-MM-DD.');
 
 export const donationsQuery = listQuery(['createdAt', 'amountCents', 'status', 'donorName'] as const, '-createdAt').extend({
   vesselId: z.coerce.number().int().positive(),

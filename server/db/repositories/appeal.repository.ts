@@ -78,6 +78,12 @@ export class AppealRepository {
     return this.joined((qb) => qb.where('appeal.vesselId = :vesselId', { vesselId }).orderBy('p.title', 'ASC'), false);
   }
 
+  /** Every repair project of a vessel (those without an appeal too), by title. */
+  async projectsOfVessel(vesselId: number): Promise<ProjectOfAppeal[]> {
+    const raw = await this.manager.createQueryBuilder().select(PROJECT_COLUMNS).from('repair_project', 'p').where('p.vesselId = :vesselId', { vesselId }).orderBy('p.title', 'ASC').getRawMany();
+    return raw.map(projectOf);
+  }
+
   create(fields: Partial<AppealEntity>) {
     return this.repo.save(this.repo.create(fields));
   }
