@@ -17,7 +17,7 @@ export const DEMO_APPEALS: DemoAppeal[] = [
   {
     slug: 'gauge-board-glasses',
     title: 'Replace the vandalised gauge glasses',
-    goalCents: 480_000,
+    goalCents: 1_200_000,
     gifts: 26,
     story: [
       'Last month two glasses of the engine room gauge board were found cracked. The board is one of the first things visitors see when they come down the ladder, and it still reads as the engineers left it.',
