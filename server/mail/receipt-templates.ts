@@ -38,8 +38,8 @@ export function receiptMail(input: ReceiptInput, kind: 'receipt' | 'corrected'):
     ? `Thank you for your gift to ${input.organisationName}`
     : `Corrected acknowledgment of your gift to ${input.organisationName}`;
   const opening = kind === 'receipt'
-    ? `Thank you for your gift towards ${input.projectTitle}. This is your acknowledgment of it; please keep it for your records.`
-    : `Part or all of your gift towards ${input.projectTitle} has been refunded. This corrected acknowledgment replaces the one we sent before.`;
+    ? `Thank you for your gift towards “${input.projectTitle}”. This is your acknowledgment of it; please keep it for your records.`
+    : `Part or all of your gift towards “${input.projectTitle}” has been refunded. This corrected acknowledgment replaces the one we sent before.`;
   const rows: [string, string][] = [
     ['Received by', legal],
     ...(input.taxId ? [['Tax identification number', input.taxId] as [string, string]] : []),

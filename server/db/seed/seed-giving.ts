@@ -19,7 +19,7 @@ export async function seedDemoGiving(dataSource: DataSource): Promise<void> {
   if (!vessel) return;
   const projects = dataSource.getRepository(RepairProjectEntity);
   const settings = await store.repos.settings.get();
-  settings.giving = { ...settings.giving, legalName: 'Harbour Steam Preservation Trust (demo)', taxId: '00-0000000' };
+  settings.giving = { ...settings.giving, legalName: settings.organisationName, taxId: '00-0000000' };
   await store.repos.settings.save(settings);
 
   let seq = 0;
