@@ -26,6 +26,8 @@ export class AppealService {
   async save(repairProjectId: number, body: Body, viewer: Express.User, actor: Actor) {
     const project = await this.projectOf(repairProjectId);
     const rendered = renderRichText(body.storyDoc, 'storyDoc');
+    // Story images are served from staff-only routes; the public sees the appeal's own photos.
+    if (rendered.images.length) throw new UnprocessableError('Put photos in the appeal’s photo list, not in the story.', { storyDoc: 'Put photos in the appeal’s photo list, not in the story.' });
     if (body.published) {
       const problems: Record<string, string> = {};
       if (!rendered.text.trim()) problems.storyDoc = 'Write the story before publishing.';

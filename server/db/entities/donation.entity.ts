@@ -6,6 +6,7 @@ import { VesselEntity } from './vessel.entity.js';
 /** One gift through a checkout session; its state follows Stripe's, confirmed through the SDK. */
 @Entity('donations')
 @Index(['appealId', 'createdAt'])
+@Index(['appealId', 'succeededAt'])
 @Index(['vesselId', 'createdAt'])
 export class DonationEntity {
   @PrimaryGeneratedColumn({ type: 'integer' })

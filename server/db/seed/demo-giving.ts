@@ -11,6 +11,8 @@ export interface DemoAppeal {
   goalCents: number;
   gifts: number;
   story: string[];
+  /** The artifact whose demo photo the appeal shows, if any. */
+  photoOf?: { objectNumber: string; altText: string };
 }
 
 export const DEMO_APPEALS: DemoAppeal[] = [
@@ -19,6 +21,7 @@ export const DEMO_APPEALS: DemoAppeal[] = [
     title: 'Replace the vandalised gauge glasses',
     goalCents: 1_200_000,
     gifts: 26,
+    photoOf: { objectNumber: '1998.1.2', altText: 'The engine room gauge board: brass-rimmed dials on a painted panel' },
     story: [
       'Last month two glasses of the engine room gauge board were found cracked. The board is one of the first things visitors see when they come down the ladder, and it still reads as the engineers left it.',
       'Your gift pays for period-correct glasses, cut to fit and set by a conservator, and for a clear screen that protects the board without hiding it. The broken fragments are kept with the board’s record.',

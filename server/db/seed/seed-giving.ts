@@ -1,4 +1,5 @@
 import type { DataSource } from 'typeorm';
+import type { AppealPhoto } from '../entities/appeal.entity.js';
 import { RepairProjectEntity } from '../entities/repair-project.entity.js';
 import { applyStripeTruth } from '../../services/giving-ledger.js';
 import { renderRichText } from '../../richtext/render.js';
@@ -34,10 +35,16 @@ export async function seedDemoGiving(dataSource: DataSource): Promise<void> {
     const storyDoc = { type: 'doc' as const, content: demo.story.map((text) => ({ type: 'paragraph', content: [{ type: 'text', text }] })) };
     const rendered = renderRichText(storyDoc, 'storyDoc');
     const now = Date.now();
+    const photos: AppealPhoto[] = [];
+    if (demo.photoOf) {
+      const artifact = await store.repos.artifacts.findByNumber(vessel.id, demo.photoOf.objectNumber);
+      const photo = artifact ? await store.repos.media.firstPhoto('artifact', artifact.id) : null;
+      if (photo) photos.push({ mediaId: photo.id, altText: photo.altText || demo.photoOf.altText, caption: photo.caption });
+    }
     await store.transaction(async (repos) => {
       const appeal = await repos.appeals.create({
         vesselId: vessel.id, repairProjectId: project.id, storyDoc, storyHtml: rendered.html, storyText: rendered.text,
-        goalCents: project.estimateCents || demo.goalCents, photos: [], publishedAt: new Date(now - 120 * DAY),
+        goalCents: project.estimateCents || demo.goalCents, photos, publishedAt: new Date(now - 120 * DAY),
       });
       for (let i = 0; i < demo.gifts; i++) {
         seq += 1;
