@@ -14,6 +14,7 @@ const ERROR_TEXT: Record<number, string> = {
   415: 'Unsupported media type',
   422: 'Understood but cannot be done; code `invalid_characters` when text holds control or text-direction characters (`fields` names them)',
   429: 'Too many attempts; see Retry-After',
+  503: 'A service it depends on (the payment provider) cannot be reached; nothing was recorded',
 };
 
 export function openApiPath(expressPath: string): string {
