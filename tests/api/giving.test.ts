@@ -246,6 +246,23 @@ describe('the fundraiser’s workspace', () => {
     expect(curatorList.items.every((d: { donorEmail: string | null }) => d.donorEmail === null)).toBe(true);
   });
 
+  it('searches donors and filters by status, project and dates', async () => {
+    const fundraiser = (await signedInAs(ctx.app, ctx.store, 'fundraiser')).client;
+    const list = (query: string) => fundraiser.get(`/api/v1/donations?vesselId=${seeded.vessel.id}&${query}`).then((r) => r.body);
+    const all = await list('pageSize=100');
+    expect(all.total).toBeGreaterThan(3);
+    expect((await list('q=quillfeather')).total).toBe(all.total);
+    expect((await list('q=nobody-by-that-name')).total).toBe(0);
+    // a % in the search is a character, not a wildcard
+    expect((await list('q=%25')).total).toBe(0);
+    expect((await list('status=pending')).items.every((d: { status: string }) => d.status === 'pending')).toBe(true);
+    expect((await list(`repairProjectId=${seeded.project.id}`)).total).toBe(all.total);
+    const today = new Date().toISOString().slice(0, 10);
+    expect((await list(`from=${today}&to=${today}`)).total).toBe(all.total);
+    expect((await list('to=2000-01-01')).total).toBe(0);
+    expect((await fundraiser.get(`/api/v1/donations?vesselId=${seeded.vessel.id}&from=yesterday`)).status).toBe(400);
+  });
+
   it('keeps totals equal to the gifts summed, and exports CSV into the audit trail', async () => {
     const fundraiser = (await signedInAs(ctx.app, ctx.store, 'fundraiser')).client;
     const totals = (await fundraiser.get(`/api/v1/vessels/${seeded.vessel.id}/giving/totals`)).body;
