@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { hazardCautions } from './hazard-cautions.js';
 import { listQuery, pageOf } from './common.js';
 import { richTextDoc } from './rich-text.js';
-import { freeText, line, text } from './text.js';
+import { freeText, line, refuseInvalidCharacters, text } from './text.js';
 
 export const REPAIR_PROJECT_STATUSES = ['proposed', 'approved', 'fundraising', 'funded', 'underway', 'complete', 'cancelled'] as const;
 export type RepairProjectStatus = (typeof REPAIR_PROJECT_STATUSES)[number];
@@ -37,8 +37,7 @@ export const REPAIR_WORK_FLAG_LABELS: Record<RepairWorkFlag, string> = {
 
 /** A slug: lowercase letters, digits and single hyphens, unique within the vessel. */
 export const SLUG_PATTERN = /^[a-z0-9]+(?:-[a-z0-9]+)*$/;
-export const slug = z
-  .string()
+export const slug = refuseInvalidCharacters(z.string(), 'Slug')
   .trim()
   .min(1, 'Slug is required.')
   .max(80, 'Slug must be at most 80 characters.')

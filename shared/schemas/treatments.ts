@@ -34,7 +34,7 @@ const treatmentFields = {
   performedById: z.number().int().positive().nullable(),
   contractorName: line(200, 'Contractor'),
   method: freeText(4000, 'Method'),
-  materials: freeText(4000, 'Materials'),
+  materials: line(1000, 'Materials'),
   findingIds: ids,
 };
 
