@@ -86,6 +86,13 @@ export class RepairProjectRepository {
     return this.changeRepo.save(this.changeRepo.create(fields));
   }
 
+  /** Sets the dates of a project's status changes, oldest first, and its creation to the first (the demo's timeline). */
+  async backdate(projectId: number, dates: Date[]) {
+    const changes = await this.statusChanges(projectId);
+    for (const [i, change] of changes.entries()) if (dates[i]) await this.changeRepo.update({ id: change.id }, { at: dates[i] });
+    if (dates[0]) await this.repo.createQueryBuilder().update().set({ createdAt: dates[0], updatedAt: dates.at(-1)! }).where('id = :id', { id: projectId }).execute();
+  }
+
   async links(projectId: number): Promise<ProjectLinks> {
     const out = { findingIds: [], riskIds: [], artifactIds: [], compartmentIds: [] } as ProjectLinks;
     for (const [kind, { entity, column }] of Object.entries(LINKS) as [LinkKind, (typeof LINKS)[LinkKind]][]) {
