@@ -20,8 +20,9 @@ const quiet = { tellKeepers: async () => undefined } as unknown as ConditionAler
 async function gaugePhoto(stage: 'before' | 'after', takenAt: Date): Promise<Buffer> {
   const base = await demoPhoto('gauge', 2, takenAt);
   if (stage === 'after') return base;
-  const cracks = `<svg xmlns="http://www.w3.org/2000/svg" width="1200" height="900"><g stroke="#fff" stroke-width="5" fill="none" opacity="0.9"><path d="M 600 450 L 470 300 L 430 210 M 470 300 L 380 330 M 600 450 L 720 600 L 760 700 M 720 600 L 820 590"/><path d="M 600 450 L 690 260 M 600 450 L 470 560 L 420 640"/></g></svg>`;
-  return sharp(base).composite([{ input: Buffer.from(cracks) }]).jpeg({ quality: 82 }).withExif({ IFD0: { Software: 'Shipkeeper demo drawing' } }).toBuffer();
+  const cracks = `<svg xmlns="http://www.w3.org/2000/svg" width="1200" height="900"><g stroke="#3a3a3a" stroke-width="6" fill="none" stroke-linecap="round"><path d="M 600 450 L 470 300 L 430 210 M 470 300 L 380 330 M 600 450 L 720 600 L 760 700 M 720 600 L 820 590"/><path d="M 600 450 L 690 260 M 600 450 L 470 560 L 420 640"/></g></svg>`;
+  const stamp = takenAt.toISOString().slice(0, 19).replace('T', ' ').replace(/-/g, ':');
+  return sharp(base).composite([{ input: Buffer.from(cracks) }]).jpeg({ quality: 82 }).withExif({ IFD0: { Software: 'Shipkeeper demo drawing' }, IFD2: { DateTimeOriginal: stamp } }).toBuffer();
 }
 
 /**
