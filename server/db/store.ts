@@ -4,6 +4,8 @@ import { ArtifactRepository } from './repositories/artifact.repository.js';
 import { ConditionReportRepository } from './repositories/condition-report.repository.js';
 import { IncidentRepository } from './repositories/incident.repository.js';
 import { RiskRepository } from './repositories/risk.repository.js';
+import { RepairProjectRepository } from './repositories/repair-project.repository.js';
+import { TreatmentRepository } from './repositories/treatment.repository.js';
 import { AuditEventRepository } from './repositories/audit-event.repository.js';
 import { CompartmentRepository } from './repositories/compartment.repository.js';
 import { DeckRepository } from './repositories/deck.repository.js';
@@ -36,6 +38,8 @@ export interface Repositories {
   conditionReports: ConditionReportRepository;
   incidents: IncidentRepository;
   risks: RiskRepository;
+  repairProjects: RepairProjectRepository;
+  treatments: TreatmentRepository;
 }
 
 function repositories(manager: EntityManager): Repositories {
@@ -57,6 +61,8 @@ function repositories(manager: EntityManager): Repositories {
     conditionReports: new ConditionReportRepository(manager),
     incidents: new IncidentRepository(manager),
     risks: new RiskRepository(manager),
+    repairProjects: new RepairProjectRepository(manager),
+    treatments: new TreatmentRepository(manager),
   };
 }
 
