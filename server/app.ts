@@ -34,6 +34,14 @@ import { hazardRoutes } from './routes/hazards.routes.js';
 import { planRoutes } from './routes/plans.routes.js';
 import { invitationRoutes } from './routes/invitations.routes.js';
 import { publicRoutes } from './routes/public.routes.js';
+import { donationRoutes } from './routes/donations.routes.js';
+import { givingPublicRoutes } from './routes/giving.routes.js';
+import { AppealService } from './services/appeal.service.js';
+import { CheckoutService } from './services/checkout.service.js';
+import { DonationService } from './services/donation.service.js';
+import { GivingReceipts } from './services/giving-receipts.js';
+import { StripeWebhookService } from './services/stripe-webhook.service.js';
+import { createStripeClient, type StripeClient } from './payments/stripe-client.js';
 import { userRoutes } from './routes/users.routes.js';
 import { vesselRoutes } from './routes/vessels.routes.js';
 import { ArtifactImportService } from './services/artifact-import.service.js';
@@ -63,10 +71,14 @@ import { UserService } from './services/user.service.js';
 import { VesselService } from './services/vessel.service.js';
 import { appVersion as version } from './version.js';
 
+const WEBHOOK_PATH = '/api/v1/webhooks/stripe';
+
 export interface AppDeps {
   config: Config;
   dataSource: DataSource;
   fakeMail: FakeMailServer | null;
+  /** The Stripe SDK, built once for Stripe or the fake (index.ts knows the fake's port). */
+  stripe?: StripeClient;
 }
 
 export interface ShipkeeperApp {
@@ -97,7 +109,7 @@ function absoluteTimeout(hours: number): RequestHandler {
   };
 }
 
-export function createApp({ config, dataSource, fakeMail }: AppDeps): ShipkeeperApp {
+export function createApp({ config, dataSource, fakeMail, stripe = createStripeClient(config.stripe) }: AppDeps): ShipkeeperApp {
   const store = new Store(dataSource);
   const sessions = new DatabaseSessionStore(dataSource, config.sessionIdleMinutes * 60_000);
   const mailer = new Mailer(config.mail, fakeMail?.port ?? null);
@@ -131,6 +143,10 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
   mediaRoutes(api, new MediaService(store, files), { incomingDir: files.incoming, maxBytes: config.mediaMaxBytes });
   calcRoutes(api);
   adminRoutes(api, { audit: new AuditService(store), settings, outbox: new OutboxService(fakeMail) });
+  const webhooks = new StripeWebhookService(store, stripe, new GivingReceipts(store, mailer));
+  const checkout = new CheckoutService(store, stripe, webhooks, config.publicUrl);
+  givingPublicRoutes(api, { checkout, webhooks, files });
+  donationRoutes(api, new DonationService(store, stripe, webhooks), new AppealService(store));
   const backups = new BackupService(config);
   backupRoutes(api, backups);
   let openApi: object | null = null;
@@ -176,6 +192,8 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
       res.sendFile(indexHtml);
     });
   }
+  // Stripe signs the body as sent: the webhook keeps it raw (and body-parser's json then leaves it alone)
+  app.use(WEBHOOK_PATH, express.raw({ type: () => true, limit: '1mb' }));
   app.use(express.json({ limit: '1mb' }));
   app.use(cookieParser());
   app.use('/api/v1', (req, _res, next) => {
@@ -205,7 +223,8 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
     res.setHeader('Cache-Control', 'no-store');
     next();
   });
-  app.use('/api/v1', csrf.protect, api.router);
+  // Stripe's calls carry no cookie and no token: their signature is their proof (checked in the route)
+  app.use('/api/v1', (req, res, next) => (req.originalUrl.split('?')[0] === WEBHOOK_PATH ? next() : csrf.protect(req, res, next)), api.router);
   app.use('/api', apiNotFound);
 
   app.use(errorHandler);

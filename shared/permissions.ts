@@ -33,6 +33,10 @@ export const PERMISSIONS = {
   /** Approving is the curator's alone: the service refuses a conservator's approval (changeStatus covers the other steps). */
   repairProject: { read: STAFF, create: ['curator', 'conservator'], update: ['curator', 'conservator'], changeStatus: ['curator', 'conservator'] },
   treatment: { read: STAFF, create: ['conservator', 'curator'], update: ['conservator', 'curator'] },
+  /** The public appeal of a repair project: fundraisers run it, curators may edit it too. */
+  appeal: { read: STAFF, update: ['fundraiser', 'curator', 'admin'] },
+  /** Gifts: donors' e-mail addresses, refunds and exports are for fundraisers and administrators only. */
+  donation: { read: ['fundraiser', 'admin', 'curator'], readDonor: ['fundraiser', 'admin'], refund: ['fundraiser', 'admin'], export: ['fundraiser', 'admin'] },
   media: { read: STAFF, create: ['curator', 'conservator', 'docent'], update: ['curator', 'conservator'], delete: ['curator', 'conservator'] },
 } as const satisfies Record<string, Record<string, readonly Role[]>>;
 

@@ -1,4 +1,6 @@
 import type { DataSource, EntityManager } from 'typeorm';
+import { AppealRepository } from './repositories/appeal.repository.js';
+import { DonationRepository } from './repositories/donation.repository.js';
 import { ArtifactMoveRepository } from './repositories/artifact-move.repository.js';
 import { ArtifactRepository } from './repositories/artifact.repository.js';
 import { ConditionReportRepository } from './repositories/condition-report.repository.js';
@@ -40,6 +42,8 @@ export interface Repositories {
   risks: RiskRepository;
   repairProjects: RepairProjectRepository;
   treatments: TreatmentRepository;
+  appeals: AppealRepository;
+  donations: DonationRepository;
 }
 
 function repositories(manager: EntityManager): Repositories {
@@ -63,6 +67,8 @@ function repositories(manager: EntityManager): Repositories {
     risks: new RiskRepository(manager),
     repairProjects: new RepairProjectRepository(manager),
     treatments: new TreatmentRepository(manager),
+    appeals: new AppealRepository(manager),
+    donations: new DonationRepository(manager),
   };
 }
 

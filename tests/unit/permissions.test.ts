@@ -55,6 +55,13 @@ const MATRIX: Record<string, Record<Role, boolean>> = {
   'risk.create': { admin: false, curator: false, conservator: true, docent: false, fundraiser: false },
   'risk.update': { admin: false, curator: false, conservator: true, docent: false, fundraiser: false },
   'risk.delete': { admin: false, curator: false, conservator: true, docent: false, fundraiser: false },
+  // Giving: fundraisers run appeals and gifts; donor e-mails, refunds and exports stay with them and the administrator.
+  'appeal.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
+  'appeal.update': { admin: true, curator: true, conservator: false, docent: false, fundraiser: true },
+  'donation.read': { admin: true, curator: true, conservator: false, docent: false, fundraiser: true },
+  'donation.readDonor': { admin: true, curator: false, conservator: false, docent: false, fundraiser: true },
+  'donation.refund': { admin: true, curator: false, conservator: false, docent: false, fundraiser: true },
+  'donation.export': { admin: true, curator: false, conservator: false, docent: false, fundraiser: true },
   'incident.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
   'incident.create': { admin: false, curator: true, conservator: true, docent: true, fundraiser: false },
   'incident.update': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },

@@ -1,3 +1,7 @@
+import { AppealMonthTotalEntity } from './appeal-month-total.entity.js';
+import { AppealEntity } from './appeal.entity.js';
+import { DonationEntity } from './donation.entity.js';
+import { StripeEventEntity } from './stripe-event.entity.js';
 import { ArtifactMoveEntity } from './artifact-move.entity.js';
 import { ArtifactEntity } from './artifact.entity.js';
 import { ConditionFindingEntity } from './condition-finding.entity.js';
@@ -28,6 +32,6 @@ import { SessionEntity } from './session.entity.js';
 import { UserEntity } from './user.entity.js';
 import { VesselEntity } from './vessel.entity.js';
 
-export { RepairProjectEntity, RepairProjectEstimateLineEntity, RepairProjectStatusChangeEntity, RepairProjectFindingEntity, RepairProjectRiskEntity, RepairProjectArtifactEntity, RepairProjectCompartmentEntity, TreatmentEntity, TreatmentFindingEntity, RiskEntity, RiskSubjectEntity, IncidentEntity, IncidentSubjectEntity, ConditionReportEntity, ConditionFindingEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, AuditEventEntity, CompartmentEntity, DeckEntity, HazardEntity, InvitationEntity, OrganisationSettingsEntity, PasswordResetEntity, PlanEntity, SessionEntity, UserEntity, VesselEntity };
+export { AppealEntity, AppealMonthTotalEntity, DonationEntity, StripeEventEntity, RepairProjectEntity, RepairProjectEstimateLineEntity, RepairProjectStatusChangeEntity, RepairProjectFindingEntity, RepairProjectRiskEntity, RepairProjectArtifactEntity, RepairProjectCompartmentEntity, TreatmentEntity, TreatmentFindingEntity, RiskEntity, RiskSubjectEntity, IncidentEntity, IncidentSubjectEntity, ConditionReportEntity, ConditionFindingEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, AuditEventEntity, CompartmentEntity, DeckEntity, HazardEntity, InvitationEntity, OrganisationSettingsEntity, PasswordResetEntity, PlanEntity, SessionEntity, UserEntity, VesselEntity };
 
-export const entities = [UserEntity, VesselEntity, OrganisationSettingsEntity, AuditEventEntity, SessionEntity, InvitationEntity, PasswordResetEntity, DeckEntity, CompartmentEntity, HazardEntity, PlanEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, ConditionReportEntity, ConditionFindingEntity, IncidentEntity, IncidentSubjectEntity, RiskEntity, RiskSubjectEntity, RepairProjectEntity, RepairProjectEstimateLineEntity, RepairProjectStatusChangeEntity, RepairProjectFindingEntity, RepairProjectRiskEntity, RepairProjectArtifactEntity, RepairProjectCompartmentEntity, TreatmentEntity, TreatmentFindingEntity];
+export const entities = [UserEntity, VesselEntity, OrganisationSettingsEntity, AuditEventEntity, SessionEntity, InvitationEntity, PasswordResetEntity, DeckEntity, CompartmentEntity, HazardEntity, PlanEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, ConditionReportEntity, ConditionFindingEntity, IncidentEntity, IncidentSubjectEntity, RiskEntity, RiskSubjectEntity, RepairProjectEntity, RepairProjectEstimateLineEntity, RepairProjectStatusChangeEntity, RepairProjectFindingEntity, RepairProjectRiskEntity, RepairProjectArtifactEntity, RepairProjectCompartmentEntity, TreatmentEntity, TreatmentFindingEntity, AppealEntity, DonationEntity, StripeEventEntity, AppealMonthTotalEntity];
