@@ -5,6 +5,7 @@ import { seedDemo } from './db/seed/seed.js';
 import { seedDemoPlans } from './db/seed/seed-plans.js';
 import { seedDemoCollection } from './db/seed/seed-collection.js';
 import { seedDemoCondition } from './db/seed/seed-condition.js';
+import { seedDemoRepairs } from './db/seed/seed-repairs.js';
 import { seedDemoGiving } from './db/seed/seed-giving.js';
 import { DEMO_PASSWORD, DEMO_USERS } from './db/seed/demo-data.js';
 import { FakeMailServer } from './fakes/mail-server.js';
@@ -39,6 +40,7 @@ if (config.seedOnStart && (await seedDemo(dataSource, { bcryptCost: config.bcryp
   await seedDemoPlans(dataSource, config);
   await seedDemoCollection(dataSource, config);
   await seedDemoCondition(dataSource, config);
+  await seedDemoRepairs(dataSource, config);
   // after the repair projects' demo: it appeals for the fundraising ones
   await seedDemoGiving(dataSource);
   console.log(`Demo data seeded. Sign in as ${DEMO_USERS.map((u) => u.email).join(', ')} with the password "${DEMO_PASSWORD}".`);

@@ -66,6 +66,8 @@ export const MEDIA_OWNERS = {
   /** Whoever may log an incident may add its photos (attach); changing them takes update. */
   incident: { resource: 'incident', read: 'read', attach: 'create' },
   'condition-report': { resource: 'conditionReport', read: 'readFindings' },
+  'treatment-before': { resource: 'treatment', read: 'read' },
+  'treatment-after': { resource: 'treatment', read: 'read' },
 } as const satisfies Record<MediaOwnerType, { resource: Resource; read: string; attach?: string }>;
 
 /** Whether the role may see the files of this kind of record: listed, described or served, in any response. */

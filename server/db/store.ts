@@ -6,6 +6,8 @@ import { ArtifactRepository } from './repositories/artifact.repository.js';
 import { ConditionReportRepository } from './repositories/condition-report.repository.js';
 import { IncidentRepository } from './repositories/incident.repository.js';
 import { RiskRepository } from './repositories/risk.repository.js';
+import { RepairProjectRepository } from './repositories/repair-project.repository.js';
+import { TreatmentRepository } from './repositories/treatment.repository.js';
 import { AuditEventRepository } from './repositories/audit-event.repository.js';
 import { CompartmentRepository } from './repositories/compartment.repository.js';
 import { DeckRepository } from './repositories/deck.repository.js';
@@ -38,6 +40,8 @@ export interface Repositories {
   conditionReports: ConditionReportRepository;
   incidents: IncidentRepository;
   risks: RiskRepository;
+  repairProjects: RepairProjectRepository;
+  treatments: TreatmentRepository;
   appeals: AppealRepository;
   donations: DonationRepository;
 }
@@ -61,6 +65,8 @@ function repositories(manager: EntityManager): Repositories {
     conditionReports: new ConditionReportRepository(manager),
     incidents: new IncidentRepository(manager),
     risks: new RiskRepository(manager),
+    repairProjects: new RepairProjectRepository(manager),
+    treatments: new TreatmentRepository(manager),
     appeals: new AppealRepository(manager),
     donations: new DonationRepository(manager),
   };

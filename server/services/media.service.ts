@@ -16,7 +16,7 @@ import { derivativeFile, makeDerivatives, type PhotoFacts } from './media-deriva
 import type { UploadedFile } from './plan.service.js';
 
 const EXTENSIONS: Record<string, string> = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp', 'application/pdf': 'pdf' };
-const OWNER_LABELS: Record<MediaOwnerType, string> = { artifact: 'an artifact', compartment: 'a compartment', 'condition-report': 'a condition report', incident: 'an incident' };
+const OWNER_LABELS: Record<MediaOwnerType, string> = { artifact: 'an artifact', compartment: 'a compartment', 'condition-report': 'a condition report', incident: 'an incident', 'treatment-before': 'a treatment', 'treatment-after': 'a treatment' };
 
 interface Owner {
   vesselId: number;
@@ -52,6 +52,11 @@ export class MediaService {
       const report = await repos.conditionReports.findById(ownerId);
       if (!report) throw new NotFoundError('The condition report');
       return { vesselId: report.vesselId, label: `condition report ${report.id}`, locked: report.status !== 'draft' };
+    }
+    if (ownerType === 'treatment-before' || ownerType === 'treatment-after') {
+      const treatment = await repos.treatments.findById(ownerId);
+      if (!treatment) throw new NotFoundError('The treatment');
+      return { vesselId: treatment.vesselId, label: `treatment ${treatment.id} (${ownerType === 'treatment-before' ? 'before' : 'after'})` };
     }
     const compartment = await repos.compartments.findById(ownerId);
     if (!compartment) throw new NotFoundError('The compartment');

@@ -1,8 +1,8 @@
 import { z } from 'zod';
 import { hazardCautions } from './hazard-cautions.js';
 import { listQuery, pageOf } from './common.js';
-import { richTextDoc } from './rich-text.js';
-import { freeText, line, text } from './text.js';
+import { EMPTY_DOC, richTextDoc } from './rich-text.js';
+import { freeText, line, refuseInvalidCharacters, text } from './text.js';
 
 export const REPAIR_PROJECT_STATUSES = ['proposed', 'approved', 'fundraising', 'funded', 'underway', 'complete', 'cancelled'] as const;
 export type RepairProjectStatus = (typeof REPAIR_PROJECT_STATUSES)[number];
@@ -16,6 +16,16 @@ export const REPAIR_PROJECT_STATUS_LABELS: Record<RepairProjectStatus, string> =
   cancelled: 'Cancelled',
 };
 
+/** The road a project travels; cancelling is open from any status before complete. */
+export const REPAIR_PROJECT_FLOW: readonly RepairProjectStatus[] = ['proposed', 'approved', 'fundraising', 'funded', 'underway', 'complete'];
+
+/** The statuses a project may move to from `status`, whoever asks. */
+export function statusesAfter(status: RepairProjectStatus): RepairProjectStatus[] {
+  if (status === 'complete' || status === 'cancelled') return [];
+  const next = REPAIR_PROJECT_FLOW[REPAIR_PROJECT_FLOW.indexOf(status) + 1];
+  return next ? [next, 'cancelled'] : ['cancelled'];
+}
+
 /** The work flags a scope may raise, beside the hazards recorded in the spaces it touches. */
 export const REPAIR_WORK_FLAGS = ['hotWork', 'asbestos', 'leadPaint'] as const;
 export type RepairWorkFlag = (typeof REPAIR_WORK_FLAGS)[number];
@@ -27,17 +37,17 @@ export const REPAIR_WORK_FLAG_LABELS: Record<RepairWorkFlag, string> = {
 
 /** A slug: lowercase letters, digits and single hyphens, unique within the vessel. */
 export const SLUG_PATTERN = /^[a-z0-9]+(?:-[a-z0-9]+)*$/;
-export const slug = z
-  .string()
+export const slug = refuseInvalidCharacters(z.string(), 'Slug')
   .trim()
   .min(1, 'Slug is required.')
   .max(80, 'Slug must be at most 80 characters.')
   .regex(SLUG_PATTERN, 'Slug may hold only lowercase letters, digits and single hyphens between them.');
 
-/** Quantities are stored in thousandths of a unit (integers), so 2.5 m² is 2500. */
-export const QUANTITY_SCALE = 1000;
+/** Quantities are stored in thousandths of a unit (integers, QUANTITY_SCALE of shared/calc/estimate.ts), so 2.5 m² is 2500. */
 export const QUANTITY_MILLI_MAX = 1_000_000_000; // 1,000,000 units
-export const UNIT_COST_CENTS_MAX = 10_000_000_000; // 100,000,000.00 per unit
+export const UNIT_COST_CENTS_MAX = 1_000_000_000; // 10,000,000.00 per unit
+/** The largest estimate total kept (1,000,000,000.00), far inside exact integers. */
+export const ESTIMATE_TOTAL_CENTS_MAX = 100_000_000_000;
 export const CONTINGENCY_BASIS_POINTS_MAX = 10_000; // 100 %
 
 export const estimateLine = z.object({
@@ -62,6 +72,39 @@ export const statusChange = z.object({
 export type StatusChange = z.infer<typeof statusChange>;
 
 const linked = z.object({ id: z.number().int(), label: z.string() });
+
+const workCaution = z.object({ kind: z.string(), label: z.string(), caution: z.string() });
+
+/** A finding the project or its treatments address, as reported, beside what the next survey of its subject recorded. */
+export const findingOutcome = z.object({
+  finding: z.object({
+    id: z.number().int(),
+    reportId: z.number().int(),
+    inspectedOn: z.string(),
+    subjectLabel: z.string(),
+    artifactLabel: z.string().nullable(),
+    agentLabel: z.string(),
+    damageLabel: z.string(),
+    severity: z.string(),
+    severityLabel: z.string(),
+    description: z.string(),
+    recommendedAction: z.string(),
+  }),
+  /** The date of the last treatment addressing it, if any. */
+  treatedOn: z.string().nullable(),
+  next: z
+    .object({
+      reportId: z.number().int(),
+      inspectedOn: z.string(),
+      grade: z.string(),
+      gradeLabel: z.string(),
+      summary: z.string(),
+      /** Findings of the same agent and damage on the same object in that report; none means it was not found again. */
+      findings: z.array(z.object({ id: z.number().int(), severityLabel: z.string(), description: z.string() })),
+    })
+    .nullable(),
+});
+export type FindingOutcome = z.infer<typeof findingOutcome>;
 
 export const repairProjectSummary = z
   .object({
@@ -94,9 +137,15 @@ export const repairProject = repairProjectSummary
     hotWork: z.boolean(),
     asbestos: z.boolean(),
     leadPaint: z.boolean(),
-    /** Cautions of the work flags and of the hazards recorded in the spaces the project touches. */
-    cautions: hazardCautions,
+    /** Cautions of the work flags (hot work, asbestos, lead paint). */
+    workCautions: z.array(workCaution),
+    /** Cautions of the hazards recorded in the linked compartments and the compartments of the linked artifacts. */
+    spaceCautions: hazardCautions,
+    /** Whether this reader may see condition findings (the roles that read findings); otherwise `findings` is empty. */
+    findingsVisible: z.boolean(),
+    findingCount: z.number().int(),
     findings: z.array(linked.extend({ reportId: z.number().int() })),
+    findingOutcomes: z.array(findingOutcome),
     risks: z.array(linked),
     artifacts: z.array(linked),
     compartments: z.array(linked.extend({ deckId: z.number().int() })),
@@ -127,7 +176,7 @@ export const estimateLineBody = z.object({
     .number({ error: 'Unit cost must be a number of cents.' })
     .int('Unit cost must be a whole number of cents.')
     .min(0, 'Unit cost may not be negative.')
-    .max(UNIT_COST_CENTS_MAX, 'Unit cost must be at most 100,000,000.00.'),
+    .max(UNIT_COST_CENTS_MAX, 'Unit cost must be at most 10,000,000.00.'),
 });
 export type EstimateLineBody = z.infer<typeof estimateLineBody>;
 
@@ -157,6 +206,7 @@ const projectFields = {
 export const createRepairProjectBody = z
   .object({
     ...projectFields,
+    scope: projectFields.scope.default(EMPTY_DOC),
     lines: projectFields.lines.default([]),
     contingencyBasisPoints: projectFields.contingencyBasisPoints.default(1000),
     contractorNotes: projectFields.contractorNotes.default(''),

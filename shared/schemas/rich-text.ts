@@ -28,16 +28,18 @@ function firstTextProblem(node: RichTextNode, label: string): string | null {
   return null;
 }
 
-const node: z.ZodType<RichTextNode> = z.lazy(() =>
-  z.object({
+// A named object with a getter is how zod 4 declares a recursive schema; the OpenAPI generator then writes a $ref to it.
+const node: z.ZodType<RichTextNode> = z
+  .object({
     type: z.string().max(40),
     text: z.string().optional(),
     attrs: z.record(z.string(), z.unknown()).optional(),
-    content: z.array(node).max(5000).optional(),
+    get content() {
+      return z.array(node).max(5000).optional();
+    },
     marks: z.array(z.object({ type: z.string().max(40), attrs: z.record(z.string(), z.unknown()).optional() })).max(10).optional(),
-  }),
-  // a named component: the OpenAPI generator refers to it instead of recursing without end
-).meta({ id: 'RichTextNode' });
+  })
+  .meta({ id: 'RichTextNode' });
 
 /** A tiptap (ProseMirror) JSON document; its text obeys the character rule of free text. */
 export function richTextDoc(label = 'Text') {

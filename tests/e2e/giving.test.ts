@@ -8,7 +8,7 @@ afterEach(async () => {
 });
 
 // The demo appeal no other browser test uses.
-const APPEAL = '/visit/appeals/gauge-board-glasses';
+const APPEAL = '/visit/appeals/steering-gear-room-deckhead';
 
 async function payWith(page: Browser['page'], card: string) {
   await page.getByLabel('Card number').fill(card);
@@ -26,7 +26,7 @@ describe('a gift, from the appeal to the acknowledgment', () => {
     browsers.push(visitor);
     const { page } = visitor;
     await page.goto(APPEAL);
-    await page.getByRole('heading', { name: 'Replace the vandalised gauge glasses' }).waitFor();
+    await page.getByRole('heading', { name: 'Steering gear room deckhead' }).waitFor();
     const raisedBefore = dollars(await page.getByTestId('appeal-raised').textContent());
     await screenshot(page, 'giving-appeal-390');
 
@@ -47,7 +47,7 @@ describe('a gift, from the appeal to the acknowledgment', () => {
     await expect.poll(() => page.getByRole('alert').textContent()).toBe('Your card was declined.');
     await payWith(page, '4242 4242 4242 4242');
 
-    await page.waitForURL(/\/visit\/appeals\/gauge-board-glasses\/thanks\?session_id=cs_test_/);
+    await page.waitForURL(/\/visit\/appeals\/steering-gear-room-deckhead\/thanks\?session_id=cs_test_/);
     await expect.poll(() => page.getByText('has been received').isVisible(), { timeout: 15_000 }).toBe(true);
     expect(await page.getByRole('status').filter({ hasText: 'Thank you' }).textContent()).toContain('$250.00');
     await screenshot(page, 'giving-thanks-390');

@@ -11,8 +11,8 @@ const DAY = 86_400_000;
 /**
  * Appeals on the demo's fundraising repair projects and a few dozen invented gifts, recorded
  * through the same ledger path as Stripe's events (so the kept totals agree with the gifts).
- * Runs after the repair projects' demo; when that has made no fundraising project, the two the
- * appeals need are made here (by slug, so a later projects demo finds them).
+ * Runs after the repair projects' demo (seed-repairs.ts); a project that is missing or not
+ * fundraising gets no appeal.
  */
 export async function seedDemoGiving(dataSource: DataSource): Promise<void> {
   const store = new Store(dataSource);
@@ -25,13 +25,8 @@ export async function seedDemoGiving(dataSource: DataSource): Promise<void> {
 
   let seq = 0;
   for (const demo of DEMO_APPEALS) {
-    let project = (await projects.findOneBy({ vesselId: vessel.id, slug: demo.slug })) ?? (await projects.findOneBy({ vesselId: vessel.id, title: demo.title }));
-    project ??= await projects.save(projects.create({
-      vesselId: vessel.id, title: demo.title, slug: demo.slug, status: 'fundraising', estimateCents: demo.goalCents,
-      scope: { type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text: demo.story[1]! }] }] },
-      scopeHtml: `<p>${demo.story[1]}</p>`, scopeText: demo.story[1]!,
-    }));
-    if (project.status !== 'fundraising' || (await store.repos.appeals.findByProject(project.id))) continue;
+    const project = await projects.findOneBy({ vesselId: vessel.id, slug: demo.slug });
+    if (!project || project.status !== 'fundraising' || (await store.repos.appeals.findByProject(project.id))) continue;
     const storyDoc = { type: 'doc' as const, content: demo.story.map((text) => ({ type: 'paragraph', content: [{ type: 'text', text }] })) };
     const rendered = renderRichText(storyDoc, 'storyDoc');
     const now = Date.now();
@@ -44,14 +39,14 @@ export async function seedDemoGiving(dataSource: DataSource): Promise<void> {
     await store.transaction(async (repos) => {
       const appeal = await repos.appeals.create({
         vesselId: vessel.id, repairProjectId: project.id, storyDoc, storyHtml: rendered.html, storyText: rendered.text,
-        goalCents: project.estimateCents || demo.goalCents, photos, publishedAt: new Date(now - 120 * DAY),
+        goalCents: project.estimateCents || 100_000, photos, publishedAt: new Date(now - demo.daysOpen * DAY),
       });
       for (let i = 0; i < demo.gifts; i++) {
         seq += 1;
         const first = DEMO_DONOR_FIRST[(seq * 7) % DEMO_DONOR_FIRST.length]!;
         const last = DEMO_DONOR_LAST[(seq * 3) % DEMO_DONOR_LAST.length]!;
         const amountCents = DEMO_AMOUNTS[(seq * 5) % DEMO_AMOUNTS.length]!;
-        const at = new Date(now - (110 - Math.floor((i * 108) / demo.gifts)) * DAY - (seq % 9) * 3_600_000);
+        const at = new Date(now - (demo.daysOpen - Math.floor((i * (demo.daysOpen - 1)) / demo.gifts)) * DAY - (seq % 9) * 3_600_000);
         const anonymous = seq % 4 === 0;
         const donation = await repos.donations.create({
           vesselId: vessel.id, appealId: appeal.id, reference: `demo-${String(seq).padStart(4, '0')}`, checkoutSessionId: `cs_demo_${String(seq).padStart(4, '0')}`,
