@@ -69,7 +69,7 @@ export function donationRoutes(api: ApiRouter, donations: DonationService, appea
     method: 'get',
     path: '/vessels/:vesselId/appeals',
     tag,
-    summary: "The vessel's repair projects (but cancelled ones) with their appeal and its kept totals, or an empty draft",
+    summary: "The vessel's appeals with their kept totals, and an empty draft for each approved or fundraising project without one",
     access: allowed('appeal', 'read'),
     params: vesselParam,
     response: z.array(appeal),

@@ -60,10 +60,12 @@ export class AppealService {
     return presentAppeal(saved, project, viewer);
   }
 
-  /** Each repair project of the vessel with its appeal, or an empty draft where none is written. */
+  /** The vessel's appeals, and an empty draft for each approved or fundraising project without one. */
   async ofVessel(vesselId: number, viewer: Express.User) {
     const [projects, rows] = await Promise.all([this.store.repos.appeals.projectsOfVessel(vesselId), this.store.repos.appeals.ofVessel(vesselId)]);
     const byProject = new Map(rows.map(({ appeal }) => [appeal.repairProjectId, appeal]));
-    return projects.filter((p) => p.status !== 'cancelled').map((project) => presentAppeal(byProject.get(project.id) ?? null, project, viewer));
+    return projects
+      .filter((p) => byProject.has(p.id) || p.status === 'approved' || p.status === 'fundraising')
+      .map((project) => presentAppeal(byProject.get(project.id) ?? null, project, viewer));
   }
 }

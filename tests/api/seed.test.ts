@@ -6,6 +6,7 @@ import { DEMO_ARTIFACTS } from '../../server/db/seed/demo-collection.js';
 import { DEMO_REPORTS, DEMO_RISKS } from '../../server/db/seed/demo-condition.js';
 import { seedDemoCondition } from '../../server/db/seed/seed-condition.js';
 import { seedDemoRepairs } from '../../server/db/seed/seed-repairs.js';
+import { seedDemoGiving } from '../../server/db/seed/seed-giving.js';
 import { signedInAs } from '../support/http.js';
 import { DEMO_COMPARTMENTS } from '../../server/db/seed/demo-ship-map.js';
 import { DEMO_PASSWORD, DEMO_USERS } from '../../server/db/seed/demo-data.js';
@@ -111,6 +112,16 @@ describe('demo seed', () => {
     expect([treatment.beforePhotos.length, treatment.afterPhotos.length]).toEqual([1, 1]);
     const shaft = (await client.get(`/api/v1/repair-projects/${repairs[1].id}`)).body;
     expect(shaft).toMatchObject({ hotWork: true, findingCount: 1, workCautions: [{ kind: 'hotWork' }] });
+
+    // Appeals on the two fundraising projects, with invented gifts whose kept totals match their sum.
+    await seedDemoGiving(ctx.dataSource);
+    const appeals = (await new Client(ctx.app).get('/api/v1/visit/appeals')).body.items;
+    expect(appeals.map((a: { slug: string }) => a.slug).sort()).toEqual(['shaft-alley-water-ingress', 'steering-gear-room-deckhead']);
+    expect(appeals.reduce((n: number, a: { giftCount: number }) => n + a.giftCount, 0)).toBeGreaterThanOrEqual(24);
+    for (const a of appeals) expect(a.raisedCents).toBeLessThan(a.goalCents);
+    const summed = await ctx.store.repos.donations.sumByAppeal(vessel.id);
+    const kept = (await ctx.store.repos.appeals.ofVessel(vessel.id)).map(({ appeal }) => [appeal.id, appeal.raisedCents, appeal.refundedCents, appeal.giftCount]);
+    expect(kept.sort()).toEqual(summed.map((r) => [r.appealId, Number(r.raisedCents), Number(r.refundedCents), Number(r.giftCount)]).sort());
 
     // `npm run seed` empties all of it (an amendment refers to the report it supersedes) and starts over.
     await clearData(ctx.dataSource);

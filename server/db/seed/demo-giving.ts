@@ -18,7 +18,7 @@ export interface DemoAppeal {
 export const DEMO_APPEALS: DemoAppeal[] = [
   {
     slug: 'steering-gear-room-deckhead',
-    gifts: 22,
+    gifts: 24,
     daysOpen: 34,
     story: [
       'Condensation drips from the deckhead of the steering gear room, and the paint has given way to rust over a quarter of it. Below it stands the steam steering engine that turned the rudder, one of the machines visitors ask about most.',
