@@ -176,6 +176,24 @@ describe('the Stripe webhook', () => {
     expect(await donationBySession(sessionId)).toMatchObject({ status: 'partially_refunded', refundedCents: 15_000 });
   });
 
+  it('marks a declined attempt failed with its reason, and an expired session expired, adding nothing', async () => {
+    const before = await appealRow();
+    const res = await gift(6_000);
+    const sessionId = new URL(res.body.url).pathname.split('/').pop()!;
+    await payOnFake(fake, res.body.url, '4000 0000 0000 0002');
+    const intentId = (await stripe.checkout.sessions.retrieve(sessionId)).payment_intent as string;
+    const failed = eventsOf(sessionId, intentId).find((e) => e.type === 'payment_intent.payment_failed')!;
+    expect((await postEvent(failed)).status).toBe(200);
+    expect(await donationBySession(sessionId)).toMatchObject({ status: 'failed', failureMessage: 'Your card was declined.' });
+    await stripe.checkout.sessions.expire(sessionId);
+    const expired = eventsOf(sessionId, intentId).find((e) => e.type === 'checkout.session.expired')!;
+    expect((await postEvent(expired)).status).toBe(200);
+    expect((await donationBySession(sessionId)).status).toBe('expired');
+    const after = await appealRow();
+    expect([after.raisedCents, after.giftCount]).toEqual([before.raisedCents, before.giftCount]);
+    expect(ctx.fakeMail.list().filter((m) => m.subject.startsWith('Thank you'))).toHaveLength(0);
+  });
+
   it('completes an event once when the first attempt failed before answering', async () => {
     const before = await appealRow();
     const { sessionId } = await paidGift(7_500);
