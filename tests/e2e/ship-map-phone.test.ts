@@ -8,7 +8,8 @@ afterEach(async () => {
 });
 
 /** How far the page reaches beyond the width of the screen, in CSS pixels. */
-const horizontalOverflow = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+// Strings: these run in the page, and the tests are type-checked without the DOM's types.
+const horizontalOverflow = (page: Page) => page.evaluate<number>('document.documentElement.scrollWidth - document.documentElement.clientWidth');
 
 async function openSecondDeck(page: Page, overlay?: 'condition' | 'risks') {
   await page.goto(`/app/ship${overlay ? `?overlay=${overlay}` : ''}`);
@@ -88,11 +89,14 @@ describe('the ship map on a wide screen', () => {
     expect(cardBox.y).toBeLessThan(map.y + 20);
 
     await expect.poll(() => page.locator('.deck-map-label').count(), { timeout: 10_000 }).toBeGreaterThan(0);
-    const z = await page.evaluate(() => {
-      const zOf = (selector: string) => Number(getComputedStyle(document.querySelector(selector)!).zIndex);
-      const label = document.querySelector('.deck-map-label')!.closest('.leaflet-pane')!;
-      return { labels: Number(getComputedStyle(label).zIndex), badges: zOf('.leaflet-marker-pane'), tooltips: zOf('.leaflet-tooltip-pane') };
-    });
+    const z = await page.evaluate<{ labels: number; badges: number; tooltips: number }>(`(() => {
+      const zOf = (el) => Number(getComputedStyle(el).zIndex);
+      return {
+        labels: zOf(document.querySelector('.deck-map-label').closest('.leaflet-pane')),
+        badges: zOf(document.querySelector('.leaflet-marker-pane')),
+        tooltips: zOf(document.querySelector('.leaflet-tooltip-pane')),
+      };
+    })()`);
     expect(z.labels).toBeGreaterThan(z.badges);
     expect(z.labels).toBeLessThan(z.tooltips);
     await screenshot(page, 'ship-map-card-beside-1440');
