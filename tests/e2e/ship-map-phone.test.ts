@@ -69,6 +69,28 @@ describe('the ship map on a phone (375 px wide)', () => {
     await screenshot(page, 'ship-map-card-375');
     await card.getByRole('button', { name: 'Close the card' }).click();
     await expect.poll(() => card.count()).toBe(0);
+
+    // Chosen on the map, the card below it is brought into view.
+    const deckId = new URL(page.url()).searchParams.get('deck');
+    const { current } = (await (await page.request.get(`/api/v1/decks/${deckId}/plan`)).json()) as { current: { maxZoom: number } };
+    const { vesselId } = (await (await page.request.get(`/api/v1/decks/${deckId}`)).json()) as { vesselId: number };
+    const { items } = (await (await page.request.get(`/api/v1/vessels/${vesselId}/compartments?deckId=${deckId}&pageSize=100`)).json()) as { items: { designation: string; outline: [number, number][] }[] };
+    const outline = items.find((c) => c.designation === '2-62-0-E')!.outline;
+    const xs = outline.map(([x]) => x);
+    const ys = outline.map(([, y]) => y);
+    await page.goto(`/app/ship?deck=${deckId}&view=${(Math.min(...xs) + Math.max(...xs)) / 2},${(Math.min(...ys) + Math.max(...ys)) / 2},${current.maxZoom - 1}`);
+    const shape = page.locator('path.deck-map-outline--2-62-0-E');
+    await shape.waitFor();
+    await page.getByRole('region', { name: 'Deck plan' }).scrollIntoViewIfNeeded();
+    await page.waitForTimeout(500);
+    const room = (await shape.boundingBox())!;
+    // Low in the outline, clear of the badges near its middle.
+    await page.mouse.click(Math.max(room.x, 0) + Math.min(room.width, 375) / 2, room.y + room.height * 0.85);
+    await card.waitFor();
+    // Within the screen (bounding boxes are measured from the top of the viewport).
+    await expect.poll(async () => (await card.boundingBox())!.y).toBeLessThan(780 - 100);
+    expect((await card.boundingBox())!.y).toBeGreaterThanOrEqual(0);
+    await screenshot(page, 'ship-map-card-from-map-375');
   });
 });
 
