@@ -30,6 +30,8 @@ export const PERMISSIONS = {
   risk: { read: STAFF, create: CONSERVATOR, update: CONSERVATOR, delete: CONSERVATOR },
   /** Docents find damage on tours and log it; a conservator or curator completes the record. */
   incident: { read: STAFF, create: ['conservator', 'curator', 'docent'], update: ['conservator', 'curator'] },
+  /** Placard labels and stories on artifacts and compartments: docents write and submit, a curator publishes. */
+  interpretation: { read: STAFF, update: ['docent', 'curator'], submit: ['docent', 'curator'], approve: CURATOR, return: CURATOR },
   media: { read: STAFF, create: ['curator', 'conservator', 'docent'], update: ['curator', 'conservator'], delete: ['curator', 'conservator'] },
 } as const satisfies Record<string, Record<string, readonly Role[]>>;
 

@@ -3,6 +3,7 @@ import { ArtifactMoveRepository } from './repositories/artifact-move.repository.
 import { ArtifactRepository } from './repositories/artifact.repository.js';
 import { ConditionReportRepository } from './repositories/condition-report.repository.js';
 import { IncidentRepository } from './repositories/incident.repository.js';
+import { InterpretationRepository } from './repositories/interpretation.repository.js';
 import { RiskRepository } from './repositories/risk.repository.js';
 import { AuditEventRepository } from './repositories/audit-event.repository.js';
 import { CompartmentRepository } from './repositories/compartment.repository.js';
@@ -36,6 +37,7 @@ export interface Repositories {
   conditionReports: ConditionReportRepository;
   incidents: IncidentRepository;
   risks: RiskRepository;
+  interpretations: InterpretationRepository;
 }
 
 function repositories(manager: EntityManager): Repositories {
@@ -57,6 +59,7 @@ function repositories(manager: EntityManager): Repositories {
     conditionReports: new ConditionReportRepository(manager),
     incidents: new IncidentRepository(manager),
     risks: new RiskRepository(manager),
+    interpretations: new InterpretationRepository(manager),
   };
 }
 

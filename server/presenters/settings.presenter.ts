@@ -10,6 +10,7 @@ export function presentSettings(settings: OrganisationSettingsEntity): Organisat
     contactEmail: settings.contactEmail,
     objectNumberPattern: settings.objectNumberPattern,
     riskScale: settings.riskScale,
+    interpretationTargets: settings.interpretationTargets,
     updatedAt: settings.updatedAt.toISOString(),
     version: settings.version,
   };

@@ -11,6 +11,8 @@ import { CompartmentEntity } from './compartment.entity.js';
 import { DeckEntity } from './deck.entity.js';
 import { HazardEntity } from './hazard.entity.js';
 import { MediaEntity } from './media.entity.js';
+import { InterpretationRevisionEntity } from './interpretation-revision.entity.js';
+import { InterpretationEntity } from './interpretation.entity.js';
 import { InvitationEntity } from './invitation.entity.js';
 import { OrganisationSettingsEntity } from './organisation-settings.entity.js';
 import { PasswordResetEntity } from './password-reset.entity.js';
@@ -19,6 +21,6 @@ import { SessionEntity } from './session.entity.js';
 import { UserEntity } from './user.entity.js';
 import { VesselEntity } from './vessel.entity.js';
 
-export { RiskEntity, RiskSubjectEntity, IncidentEntity, IncidentSubjectEntity, ConditionReportEntity, ConditionFindingEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, AuditEventEntity, CompartmentEntity, DeckEntity, HazardEntity, InvitationEntity, OrganisationSettingsEntity, PasswordResetEntity, PlanEntity, SessionEntity, UserEntity, VesselEntity };
+export { InterpretationEntity, InterpretationRevisionEntity, RiskEntity, RiskSubjectEntity, IncidentEntity, IncidentSubjectEntity, ConditionReportEntity, ConditionFindingEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, AuditEventEntity, CompartmentEntity, DeckEntity, HazardEntity, InvitationEntity, OrganisationSettingsEntity, PasswordResetEntity, PlanEntity, SessionEntity, UserEntity, VesselEntity };
 
-export const entities = [UserEntity, VesselEntity, OrganisationSettingsEntity, AuditEventEntity, SessionEntity, InvitationEntity, PasswordResetEntity, DeckEntity, CompartmentEntity, HazardEntity, PlanEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, ConditionReportEntity, ConditionFindingEntity, IncidentEntity, IncidentSubjectEntity, RiskEntity, RiskSubjectEntity];
+export const entities = [UserEntity, VesselEntity, OrganisationSettingsEntity, AuditEventEntity, SessionEntity, InvitationEntity, PasswordResetEntity, DeckEntity, CompartmentEntity, HazardEntity, PlanEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, ConditionReportEntity, ConditionFindingEntity, IncidentEntity, IncidentSubjectEntity, RiskEntity, RiskSubjectEntity, InterpretationEntity, InterpretationRevisionEntity];

@@ -1,5 +1,6 @@
 import { Column, Entity, PrimaryColumn, UpdateDateColumn, VersionColumn } from 'typeorm';
 import { DEFAULT_RISK_SCALE, type RiskScale } from '../../../shared/calc/abc-risk.js';
+import { DEFAULT_INTERPRETATION_TARGETS, type InterpretationTargets } from '../../../shared/schemas/interpretation.js';
 import type { UnitSystem } from '../../../shared/schemas/settings.js';
 
 /** The organisation's settings: a single row with id 1. */
@@ -30,6 +31,10 @@ export class OrganisationSettingsEntity {
   /** Anchors of the ABC scales and floors of the priority bands (shared/calc/abc-risk.ts). */
   @Column({ type: 'simple-json', default: JSON.stringify(DEFAULT_RISK_SCALE) })
   riskScale: RiskScale;
+
+  /** Word and grade targets of interpretive text (shared/schemas/interpretation.ts). */
+  @Column({ type: 'simple-json', default: JSON.stringify(DEFAULT_INTERPRETATION_TARGETS) })
+  interpretationTargets: InterpretationTargets;
 
   @UpdateDateColumn({ type: 'datetime' })
   updatedAt: Date;
