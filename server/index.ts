@@ -5,6 +5,7 @@ import { seedDemo } from './db/seed/seed.js';
 import { seedDemoPlans } from './db/seed/seed-plans.js';
 import { seedDemoCollection } from './db/seed/seed-collection.js';
 import { seedDemoCondition } from './db/seed/seed-condition.js';
+import { seedDemoInterpretation } from './db/seed/seed-interpretation.js';
 import { DEMO_PASSWORD, DEMO_USERS } from './db/seed/demo-data.js';
 import { FakeMailServer } from './fakes/mail-server.js';
 import { FakeStripeServer } from './fakes/stripe/server.js';
@@ -38,6 +39,7 @@ if (config.seedOnStart && (await seedDemo(dataSource, { bcryptCost: config.bcryp
   await seedDemoPlans(dataSource, config);
   await seedDemoCollection(dataSource, config);
   await seedDemoCondition(dataSource, config);
+  await seedDemoInterpretation(dataSource, config);
   console.log(`Demo data seeded. Sign in as ${DEMO_USERS.map((u) => u.email).join(', ')} with the password "${DEMO_PASSWORD}".`);
 }
 

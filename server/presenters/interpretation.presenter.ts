@@ -1,4 +1,5 @@
 import { can } from '../../shared/permissions.js';
+import { stableJson } from '../../shared/richtext/plain-text.js';
 import { AUDIENCES, INTERPRETATION_PARTS, type Interpretation, type InterpretationSubject, type InterpretationTargets, type InterpretationTexts } from '../../shared/schemas/interpretation.js';
 import type { InterpretationEntity } from '../db/entities/interpretation.entity.js';
 import type { UserEntity } from '../db/entities/user.entity.js';
@@ -7,7 +8,7 @@ const EMPTY: InterpretationTexts = { general: null, families: null, technical: n
 
 /** Whether two sets of texts hold the same documents (what was written, not when). */
 export function sameTexts(a: InterpretationTexts | null, b: InterpretationTexts | null): boolean {
-  const docs = (t: InterpretationTexts | null) => JSON.stringify(AUDIENCES.map((aud) => INTERPRETATION_PARTS.map((p) => t?.[aud]?.[p]?.doc ?? null)));
+  const docs = (t: InterpretationTexts | null) => stableJson(AUDIENCES.map((aud) => INTERPRETATION_PARTS.map((p) => t?.[aud]?.[p]?.doc ?? null)));
   return docs(a) === docs(b);
 }
 

@@ -36,7 +36,8 @@ const node: z.ZodType<RichTextNode> = z.lazy(() =>
     content: z.array(node).max(5000).optional(),
     marks: z.array(z.object({ type: z.string().max(40), attrs: z.record(z.string(), z.unknown()).optional() })).max(10).optional(),
   }),
-);
+  // A named component, so that the OpenAPI document refers to it instead of unfolding it forever.
+).meta({ id: 'RichTextNode' });
 
 /** A tiptap (ProseMirror) JSON document; its text obeys the character rule of free text. */
 export function richTextDoc(label = 'Text') {

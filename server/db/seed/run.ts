@@ -5,6 +5,7 @@ import { clearData, seedDemo } from './seed.js';
 import { seedDemoPlans } from './seed-plans.js';
 import { seedDemoCollection } from './seed-collection.js';
 import { seedDemoCondition } from './seed-condition.js';
+import { seedDemoInterpretation } from './seed-interpretation.js';
 import { FileStore } from '../../storage/file-store.js';
 
 const config = loadConfig();
@@ -17,6 +18,7 @@ try {
   await seedDemoPlans(dataSource, config);
   await seedDemoCollection(dataSource, config);
   await seedDemoCondition(dataSource, config);
+  await seedDemoInterpretation(dataSource, config);
   await dataSource.destroy();
   console.log(`Demo data written to ${config.databasePath}.`);
 } catch (err) {
