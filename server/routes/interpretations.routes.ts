@@ -2,11 +2,14 @@ import { idParam } from '../../shared/schemas/common.js';
 import {
   interpretation,
   interpretationActionBody,
+  interpretationPage,
+  interpretationsQuery,
   publicInterpretation,
   returnInterpretationBody,
   saveInterpretationBody,
   type InterpretationSubject,
 } from '../../shared/schemas/interpretation.js';
+import { vesselParam } from '../../shared/schemas/decks.js';
 import type { ApiRouter } from '../http/api-router.js';
 import { allowed, anyone } from '../http/access.js';
 import { actorOf } from '../services/audit.service.js';
@@ -20,6 +23,19 @@ const SUBJECTS: { type: InterpretationSubject; base: string; noun: string }[] = 
 /** Interpretive text of artifacts and compartments, its review, and the public read of what is published. */
 export function interpretationRoutes(api: ApiRouter, interpretations: InterpretationService) {
   const tag = 'Interpretation';
+
+  api.route({
+    method: 'get',
+    path: '/vessels/:vesselId/interpretations',
+    tag,
+    summary: "A vessel's interpretive texts (paged): filter by state (the review queue is `in-review`) and kind of subject; `q` searches their words, with a snippet",
+    access: allowed('interpretation', 'read'),
+    params: vesselParam,
+    query: interpretationsQuery,
+    response: interpretationPage,
+    errors: [404],
+    handler: ({ params, query }) => interpretations.list(params.vesselId, query),
+  });
 
   for (const { type, base, noun } of SUBJECTS) {
     api.route({

@@ -7,6 +7,8 @@ import {
   type Audience,
   type AudienceParts,
   type Interpretation,
+  type InterpretationsQuery,
+  type InterpretationSummary,
   type InterpretationSubject,
   type InterpretationTexts,
   type PublicInterpretation,
@@ -249,6 +251,30 @@ export class InterpretationService {
       await this.tell([author], `Returned with a comment: ${subject.label}`, [`${viewer.name} returned your interpretive text of ${subject.label}:`, body.comment, 'Change it and submit it again.'], subject.path);
     }
     return this.get(type, id, viewer);
+  }
+
+  /** The vessel's texts as a list: the review queue (state in-review), or a search of their words. */
+  async list(vesselId: number, query: InterpretationsQuery) {
+    const repos = this.store.repos;
+    if (!(await repos.vessels.findById(vesselId))) throw new NotFoundError('The vessel');
+    const page = await repos.interpretations.page(vesselId, query);
+    const ids = (type: InterpretationSubject) => page.items.filter((i) => i.record.subjectType === type).map((i) => i.record.subjectId);
+    const artifacts = await repos.artifacts.labels(ids('artifact'));
+    const compartments = await repos.compartments.labels(ids('compartment'));
+    const items: InterpretationSummary[] = page.items.map(({ record, snippet }) => ({
+      subjectType: record.subjectType,
+      subjectId: record.subjectId,
+      subjectLabel: (record.subjectType === 'artifact' ? artifacts.get(record.subjectId) : compartments.get(record.subjectId)?.label) ?? `${record.subjectType} ${record.subjectId}`,
+      state: record.state,
+      audiences: AUDIENCES.filter((a) => record.draft[a]),
+      differsFromPublished: Boolean(record.published) && !sameTexts(record.draft, record.published),
+      hasPublished: Boolean(record.published),
+      submittedBy: record.submittedBy ? { id: record.submittedBy.id, name: record.submittedBy.name } : null,
+      lastEditedBy: record.lastEditedBy ? { id: record.lastEditedBy.id, name: record.lastEditedBy.name } : null,
+      updatedAt: record.updatedAt.toISOString(),
+      snippet,
+    }));
+    return { ...page, items };
   }
 
   /** The published snapshot only, for visitors; 404 when nothing is published. */

@@ -1,6 +1,7 @@
 import { z } from 'zod';
+import { listQuery, pageOf } from './common.js';
 import { richTextDoc, type RichTextDoc } from './rich-text.js';
-import { text } from './text.js';
+import { line, text } from './text.js';
 
 /** Interpretive text on an artifact or a compartment: a placard label and a story, per audience. */
 export const INTERPRETATION_SUBJECTS = ['artifact', 'compartment'] as const;
@@ -120,3 +121,31 @@ export const publicInterpretation = z
   })
   .meta({ id: 'PublicInterpretation' });
 export type PublicInterpretation = z.infer<typeof publicInterpretation>;
+
+/** A vessel's interpretive texts: the review queue (state), or a search of their words (q). */
+export const interpretationsQuery = listQuery(['updatedAt', 'state'], '-updatedAt').extend({
+  state: z.enum(INTERPRETATION_STATES, { error: 'Choose draft, in-review or published.' }).optional(),
+  subjectType: z.enum(INTERPRETATION_SUBJECTS, { error: 'Choose artifact or compartment.' }).optional(),
+  q: line(200, 'Search').optional(),
+});
+export type InterpretationsQuery = z.infer<typeof interpretationsQuery>;
+
+export const interpretationSummary = z
+  .object({
+    subjectType: z.enum(INTERPRETATION_SUBJECTS),
+    subjectId: z.number().int(),
+    subjectLabel: z.string(),
+    state: z.enum(INTERPRETATION_STATES),
+    audiences: z.array(z.enum(AUDIENCES)),
+    differsFromPublished: z.boolean(),
+    hasPublished: z.boolean(),
+    submittedBy: person,
+    lastEditedBy: person,
+    updatedAt: z.string(),
+    /** With `q`: the matching words in context, marked as in the collection search. */
+    snippet: z.string().nullable(),
+  })
+  .meta({ id: 'InterpretationSummary' });
+export type InterpretationSummary = z.infer<typeof interpretationSummary>;
+export const interpretationPage = pageOf(interpretationSummary).meta({ id: 'InterpretationPage' });
+export type InterpretationPage = z.infer<typeof interpretationPage>;

@@ -1,4 +1,4 @@
-import type { Interpretation, InterpretationSubject, SaveInterpretationBody } from '@shared/schemas/interpretation';
+import type { Interpretation, InterpretationPage, InterpretationsQuery, InterpretationSubject, SaveInterpretationBody } from '@shared/schemas/interpretation';
 import { api } from './client';
 
 const base = (type: InterpretationSubject, id: number) => `/${type === 'artifact' ? 'artifacts' : 'compartments'}/${id}/interpretation`;
@@ -9,3 +9,5 @@ export const submitInterpretation = (type: InterpretationSubject, id: number, ve
 export const approveInterpretation = (type: InterpretationSubject, id: number, version: number) => api.post<Interpretation>(`${base(type, id)}/approve`, { version });
 export const returnInterpretation = (type: InterpretationSubject, id: number, version: number, comment: string) =>
   api.post<Interpretation>(`${base(type, id)}/return`, { version, comment });
+
+export const listInterpretations = (vesselId: number, params: Partial<InterpretationsQuery>) => api.get<InterpretationPage>(`/vessels/${vesselId}/interpretations`, params);

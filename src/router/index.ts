@@ -48,6 +48,7 @@ export const router = createRouter({
         { path: 'condition/:id', name: 'condition-report', component: () => import('@/views/staff/ConditionReportView.vue'), meta: { title: 'Condition report', permission: { resource: 'conditionReport', action: 'read' } } },
         { path: 'incidents', name: 'incidents', component: () => import('@/views/staff/IncidentsView.vue'), meta: { title: 'Incidents', permission: { resource: 'incident', action: 'read' } } },
         { path: 'incidents/:id', name: 'incident', component: () => import('@/views/staff/IncidentView.vue'), meta: { title: 'Incident', permission: { resource: 'incident', action: 'read' } } },
+        { path: 'interpretation', name: 'interpretations', component: () => import('@/views/staff/InterpretationsView.vue'), meta: { title: 'Interpretation', permission: { resource: 'interpretation', action: 'read' } } },
         { path: 'risks', name: 'risks', component: () => import('@/views/staff/RisksView.vue'), meta: { title: 'Risk register', permission: { resource: 'risk', action: 'read' } } },
         { path: 'people', name: 'people', component: () => import('@/views/staff/PeopleView.vue'), meta: { title: 'People', permission: { resource: 'user', action: 'read' } } },
         { path: 'audit-trail', name: 'audit-trail', component: () => import('@/views/staff/AuditTrailView.vue'), meta: { title: 'Audit trail', permission: { resource: 'auditEvent', action: 'read' } } },

@@ -204,3 +204,29 @@ describe('interpretation of a compartment', () => {
     expect(remove.body.error.message).toBe('1-40-2-M has published interpretive text that visitors read. The compartment stays; change its access status instead.');
   });
 });
+
+describe('the list of a vessel’s interpretive texts', () => {
+  it('is the review queue by state, and searches the words of every audience', async () => {
+    const a = (await docent.send('put', path(), { version: 0, general: { label: LABEL, story: STORY } })).body;
+    await docent.post(`${path()}/submit`, { version: a.version });
+    await curator.send('put', `/api/v1/compartments/${emptyCompartmentId}/interpretation`, { version: 0, families: { label: doc('Gunpowder was kept here, far from any flame.'), story: null } });
+
+    const all = (await conservator.get(`/api/v1/vessels/${vesselId}/interpretations`)).body;
+    expect(all.total).toBe(2);
+    const queue = (await curator.get(`/api/v1/vessels/${vesselId}/interpretations?state=in-review`)).body;
+    expect(queue.items).toEqual([
+      expect.objectContaining({ subjectType: 'artifact', subjectId: artifactId, subjectLabel: '2026.1.1 Steam gauge', state: 'in-review', audiences: ['general'], hasPublished: false, snippet: null }),
+    ]);
+
+    // "valves" finds "valve" (stemmed), in the general story.
+    const found = (await conservator.get(`/api/v1/vessels/${vesselId}/interpretations?q=valves`)).body;
+    expect(found.items.map((i: { subjectLabel: string }) => i.subjectLabel)).toEqual(['2026.1.1 Steam gauge']);
+    expect(found.items[0].snippet).toContain('safety');
+    const powder = (await conservator.get(`/api/v1/vessels/${vesselId}/interpretations?q=gunpowder`)).body;
+    expect(powder.items.map((i: { subjectLabel: string }) => i.subjectLabel)).toEqual(['1-40-2-M Magazine']);
+    expect((await conservator.get(`/api/v1/vessels/${vesselId}/interpretations?q=${encodeURIComponent('"*')}`)).body.total).toBe(0);
+    const bad = await conservator.get(`/api/v1/vessels/${vesselId}/interpretations?state=approved`);
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields.state).toBe('Choose draft, in-review or published.');
+  });
+});
