@@ -230,3 +230,16 @@ describe('the list of a vessel’s interpretive texts', () => {
     expect(bad.body.error.fields.state).toBe('Choose draft, in-review or published.');
   });
 });
+
+describe('reading targets', () => {
+  it('come from the organisation settings, which the administrator changes within bounds', async () => {
+    const admin = (await signedInAs(ctx.app, ctx.store, 'admin')).client;
+    const settings = (await admin.get('/api/v1/settings')).body;
+    const bad = await admin.patch('/api/v1/settings', { version: settings.version, interpretationTargets: { labelMaxWords: 2, maxGrade: { general: 8, families: 30, technical: null } } });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields).toMatchObject({ 'interpretationTargets.labelMaxWords': 'A label may have at least 5 words.', 'interpretationTargets.maxGrade.families': 'A grade target is at most 18.' });
+    const ok = await admin.patch('/api/v1/settings', { version: settings.version, interpretationTargets: { labelMaxWords: 60, maxGrade: { general: 7, families: 6, technical: 12 } } });
+    expect(ok.status, JSON.stringify(ok.body)).toBe(200);
+    expect((await docent.get(path())).body.targets).toEqual({ labelMaxWords: 60, maxGrade: { general: 7, families: 6, technical: 12 } });
+  });
+});
