@@ -3,6 +3,7 @@ import {
   interpretation,
   interpretationActionBody,
   interpretationPage,
+  interpretationRevisions,
   interpretationsQuery,
   publicInterpretation,
   returnInterpretationBody,
@@ -48,6 +49,18 @@ export function interpretationRoutes(api: ApiRouter, interpretations: Interpreta
       response: interpretation,
       errors: [404],
       handler: ({ req, params }) => interpretations.get(type, params.id, req.user!),
+    });
+
+    api.route({
+      method: 'get',
+      path: `${base}/revisions`,
+      tag,
+      summary: `Every kept save of ${noun}'s draft, newest first, with who saved it and the texts as they were`,
+      access: allowed('interpretation', 'read'),
+      params: idParam,
+      response: interpretationRevisions,
+      errors: [404],
+      handler: ({ params }) => interpretations.revisions(type, params.id),
     });
 
     api.route({

@@ -9,6 +9,7 @@ import {
   type Interpretation,
   type InterpretationsQuery,
   type InterpretationSummary,
+  type InterpretationRevision,
   type InterpretationSubject,
   type InterpretationTexts,
   type PublicInterpretation,
@@ -251,6 +252,20 @@ export class InterpretationService {
       await this.tell([author], `Returned with a comment: ${subject.label}`, [`${viewer.name} returned your interpretive text of ${subject.label}:`, body.comment, 'Change it and submit it again.'], subject.path);
     }
     return this.get(type, id, viewer);
+  }
+
+  /** Every kept save of the draft, newest first. */
+  async revisions(type: InterpretationSubject, id: number): Promise<InterpretationRevision[]> {
+    const repos = this.store.repos;
+    await this.subject(repos, type, id);
+    const record = await repos.interpretations.findFor(type, id);
+    if (!record) return [];
+    return (await repos.interpretations.revisionsOf(record.id)).map((r) => ({
+      number: r.number,
+      savedAt: r.savedAt.toISOString(),
+      savedBy: r.savedBy ? { id: r.savedBy.id, name: r.savedBy.name } : null,
+      texts: r.content,
+    }));
   }
 
   /** The vessel's texts as a list: the review queue (state in-review), or a search of their words. */

@@ -149,3 +149,10 @@ export const interpretationSummary = z
 export type InterpretationSummary = z.infer<typeof interpretationSummary>;
 export const interpretationPage = pageOf(interpretationSummary).meta({ id: 'InterpretationPage' });
 export type InterpretationPage = z.infer<typeof interpretationPage>;
+
+/** One kept save of the draft, newest first in lists. */
+export const interpretationRevision = z
+  .object({ number: z.number().int(), savedAt: z.string(), savedBy: person, texts: interpretationTexts })
+  .meta({ id: 'InterpretationRevision' });
+export type InterpretationRevision = z.infer<typeof interpretationRevision>;
+export const interpretationRevisions = z.array(interpretationRevision);

@@ -80,6 +80,10 @@ describe('interpretation of an artifact', () => {
     // Saving the same text again writes nothing.
     const same = await docent.send('put', path(), { version: 2, general: { label: LABEL, story: doc('A shorter story.') } });
     expect(same.body).toMatchObject({ version: 2, revisions: 2 });
+    const revisions = (await conservator.get(`${path()}/revisions`)).body;
+    expect(revisions.map((r: { number: number }) => r.number)).toEqual([2, 1]);
+    expect(revisions[1].texts.general.story.text).toBe('Firemen watched this gauge all watch long.\nIf the needle climbed too high, a safety valve lifted with a roar.');
+    expect(revisions[0]).toMatchObject({ savedBy: { name: expect.any(String) }, texts: { general: { story: { text: 'A shorter story.' } } } });
   });
 
   it('refuses what the editor does not make, and a script link never reaches the html', async () => {

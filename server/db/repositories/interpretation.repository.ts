@@ -40,6 +40,10 @@ export class InterpretationRepository {
     return this.revisions.save(this.revisions.create(fields));
   }
 
+  revisionsOf(interpretationId: number) {
+    return this.revisions.find({ where: { interpretationId }, relations: { savedBy: true }, order: { number: 'DESC' } });
+  }
+
   revisionCount(interpretationId: number) {
     return this.revisions.countBy({ interpretationId });
   }
