@@ -147,14 +147,15 @@ export class InterpretationService {
         record.lastEditedById = viewer.id;
         record = await repos.interpretations.save(record);
       }
-      await repos.interpretations.addRevision({ interpretationId: record.id, number: record.version, content: texts, savedById: viewer.id, savedAt: new Date() });
+      const number = (await repos.interpretations.revisionCount(record.id)) + 1;
+      await repos.interpretations.addRevision({ interpretationId: record.id, number, content: texts, savedById: viewer.id, savedAt: new Date() });
       await repos.search.put({ kind: 'interpretation', recordId: record.id, vesselId: subject.vesselId, number: '', title: subject.label, body: searchBody(texts), extra: AUDIENCES.filter((a) => texts[a]).map((a) => AUDIENCE_LABELS[a]).join(' ') });
       await recordAudit(repos, actor, {
         action: 'update',
         entityType: 'interpretation',
         entityId: record.id,
         vesselId: subject.vesselId,
-        summary: `Interpretation of ${subject.label} saved (revision ${record.version})${wasInReview ? ', taken out of review' : ''}`,
+        summary: `Interpretation of ${subject.label} saved (revision ${number})${wasInReview ? ', taken out of review' : ''}`,
       });
     });
     return this.get(type, id, viewer);

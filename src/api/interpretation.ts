@@ -1,4 +1,4 @@
-import type { Interpretation, InterpretationPage, InterpretationsQuery, InterpretationSubject, SaveInterpretationBody } from '@shared/schemas/interpretation';
+import type { Interpretation, InterpretationPage, InterpretationRevision, InterpretationsQuery, InterpretationSubject, SaveInterpretationBody } from '@shared/schemas/interpretation';
 import { api } from './client';
 
 const base = (type: InterpretationSubject, id: number) => `/${type === 'artifact' ? 'artifacts' : 'compartments'}/${id}/interpretation`;
@@ -11,3 +11,4 @@ export const returnInterpretation = (type: InterpretationSubject, id: number, ve
   api.post<Interpretation>(`${base(type, id)}/return`, { version, comment });
 
 export const listInterpretations = (vesselId: number, params: Partial<InterpretationsQuery>) => api.get<InterpretationPage>(`/vessels/${vesselId}/interpretations`, params);
+export const listInterpretationRevisions = (type: InterpretationSubject, id: number) => api.get<InterpretationRevision[]>(`${base(type, id)}/revisions`);

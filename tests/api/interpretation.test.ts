@@ -139,6 +139,9 @@ describe('interpretation of an artifact', () => {
     const redraft = await docent.send('put', path(), { version: approved.body.version, general: { label: doc('A new draft label nobody approved.'), story: STORY } });
     expect(redraft.body).toMatchObject({ state: 'draft', differsFromPublished: true });
     expect(redraft.body.published.general.label.html).toBe('<p>This brass gauge showed the steam pressure in the boilers.</p>');
+    // Revisions count saves only: submitting and approving change the version, not the numbering.
+    expect(redraft.body.revisions).toBe(2);
+    expect((await docent.get(`${path()}/revisions`)).body.map((r: { number: number }) => r.number)).toEqual([2, 1]);
 
     const visitor = new Client(ctx.app);
     const pub = await visitor.get(`/api/v1/visit/artifacts/${artifactId}/interpretation`);

@@ -3,7 +3,7 @@ import type { InterpretationTexts } from '../../../shared/schemas/interpretation
 import { InterpretationEntity } from './interpretation.entity.js';
 import { UserEntity } from './user.entity.js';
 
-/** One save of an interpretation's draft, kept as it was (number = the version it made). */
+/** One save of an interpretation's draft, kept as it was; numbered 1, 2, 3… per interpretation. */
 @Entity('interpretation_revisions')
 @Index(['interpretationId', 'number'], { unique: true })
 export class InterpretationRevisionEntity {
