@@ -37,6 +37,8 @@ export const PERMISSIONS = {
   appeal: { read: STAFF, update: ['fundraiser', 'curator', 'admin'] },
   /** Gifts: donors' e-mail addresses, refunds and exports are for fundraisers and administrators only. */
   donation: { read: ['fundraiser', 'admin', 'curator'], readDonor: ['fundraiser', 'admin'], refund: ['fundraiser', 'admin'], export: ['fundraiser', 'admin'] },
+  /** Placard labels and stories on artifacts and compartments: docents write and submit, a curator publishes. */
+  interpretation: { read: STAFF, update: ['docent', 'curator'], submit: ['docent', 'curator'], approve: CURATOR, return: CURATOR },
   media: { read: STAFF, create: ['curator', 'conservator', 'docent'], update: ['curator', 'conservator'], delete: ['curator', 'conservator'] },
 } as const satisfies Record<string, Record<string, readonly Role[]>>;
 

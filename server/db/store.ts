@@ -5,6 +5,7 @@ import { ArtifactMoveRepository } from './repositories/artifact-move.repository.
 import { ArtifactRepository } from './repositories/artifact.repository.js';
 import { ConditionReportRepository } from './repositories/condition-report.repository.js';
 import { IncidentRepository } from './repositories/incident.repository.js';
+import { InterpretationRepository } from './repositories/interpretation.repository.js';
 import { RiskRepository } from './repositories/risk.repository.js';
 import { RepairProjectRepository } from './repositories/repair-project.repository.js';
 import { TreatmentRepository } from './repositories/treatment.repository.js';
@@ -44,6 +45,7 @@ export interface Repositories {
   treatments: TreatmentRepository;
   appeals: AppealRepository;
   donations: DonationRepository;
+  interpretations: InterpretationRepository;
 }
 
 function repositories(manager: EntityManager): Repositories {
@@ -69,6 +71,7 @@ function repositories(manager: EntityManager): Repositories {
     treatments: new TreatmentRepository(manager),
     appeals: new AppealRepository(manager),
     donations: new DonationRepository(manager),
+    interpretations: new InterpretationRepository(manager),
   };
 }
 

@@ -60,3 +60,15 @@ export function conditionAlertMail(input: { to: string; name: string; subject: s
     html: layout(input.subject, paragraphs, { label: 'Open in Shipkeeper', url: input.url }, footer),
   };
 }
+
+/** Review of interpretive text: to curators when it is submitted, to its author when it is published or returned. */
+export function interpretationReviewMail(input: { to: string; name: string; subject: string; lines: string[]; url: string; organisationName: string }): OutgoingMail {
+  const paragraphs = [`Hello ${input.name},`, ...input.lines];
+  const footer = `You receive this as a member of the staff of ${input.organisationName} who writes or reviews interpretive text.`;
+  return {
+    to: input.to,
+    subject: input.subject,
+    text: `${paragraphs.join('\n\n')}\n\nOpen it in Shipkeeper: ${input.url}\n\n${footer}\n`,
+    html: layout(input.subject, paragraphs, { label: 'Open in Shipkeeper', url: input.url }, footer),
+  };
+}

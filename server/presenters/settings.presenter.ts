@@ -12,6 +12,7 @@ export function presentSettings(settings: OrganisationSettingsEntity): Organisat
     objectNumberPattern: settings.objectNumberPattern,
     riskScale: settings.riskScale,
     giving: { ...DEFAULT_GIVING_SETTINGS, ...settings.giving },
+    interpretationTargets: settings.interpretationTargets,
     updatedAt: settings.updatedAt.toISOString(),
     version: settings.version,
   };

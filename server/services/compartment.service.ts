@@ -147,6 +147,10 @@ export class CompartmentService {
         const what = [reports && `${reports} condition report${reports > 1 ? 's' : ''}`, incidents && `${incidents} incident${incidents > 1 ? 's' : ''}`, risks && `${risks} risk${risks > 1 ? 's' : ''}`].filter(Boolean).join(', ');
         throw new ConflictError(`${compartment.designation} is named in ${what}. Condition records are kept, so the compartment stays; change its access status instead.`);
       }
+      const interpretation = await repos.interpretations.findFor('compartment', id);
+      if (interpretation?.published) throw new ConflictError(`${compartment.designation} has published interpretive text that visitors read. The compartment stays; change its access status instead.`);
+      if (interpretation) await repos.search.remove('interpretation', interpretation.id);
+      await repos.interpretations.removeFor('compartment', id);
       await repos.compartments.remove(id);
       await recordAudit(repos, actor, {
         action: 'delete',

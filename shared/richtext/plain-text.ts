@@ -31,3 +31,10 @@ export function isEmptyRichText(doc: RichTextDoc | null | undefined): boolean {
     (node.type === 'text' && Boolean(node.text?.trim())) || node.type === 'image' || node.type === 'explainer' || (node.content ?? []).some(walk);
   return !doc || !walk(doc as AnyNode);
 }
+
+/** JSON with object keys sorted: two documents compare equal whatever order their keys came in (the editor's and zod's differ). */
+export function stableJson(value: unknown): string {
+  return JSON.stringify(value, (_key, v: unknown) =>
+    v && typeof v === 'object' && !Array.isArray(v) ? Object.fromEntries(Object.entries(v as Record<string, unknown>).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))) : v,
+  );
+}

@@ -44,7 +44,7 @@ const node: z.ZodType<RichTextNode> = z
 /** A tiptap (ProseMirror) JSON document; its text obeys the character rule of free text. */
 export function richTextDoc(label = 'Text') {
   return z
-    .object({ type: z.literal('doc', { error: `${label} must be a rich-text document.` }), content: z.array(node).max(5000).optional() })
+    .object({ type: z.literal('doc', { error: `${label} must be a rich-text document.` }), content: z.array(node).max(5000).optional() }, { error: `${label} must be a rich-text document.` })
     .check((ctx) => {
       if (JSON.stringify(ctx.value).length > RICH_TEXT_MAX_BYTES) {
         ctx.issues.push({ code: 'custom', message: `${label} is too long (at most ${RICH_TEXT_MAX_BYTES / 1000} kB).`, input: ctx.value });

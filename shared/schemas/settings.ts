@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { riskScaleProblems } from '../calc/abc-risk.js';
 import { PATTERN_PROBLEM_MESSAGES, patternProblem } from '../calc/object-number.js';
 import { givingSettings } from './giving-settings.js';
+import { interpretationTargets } from './interpretation.js';
 import { refuseInvalidCharacters, text } from './text.js';
 
 export const UNIT_SYSTEMS = ['us-customary', 'metric'] as const;
@@ -36,6 +37,7 @@ export const organisationSettings = z
     objectNumberPattern: z.string(),
     riskScale,
     giving: givingSettings,
+    interpretationTargets,
     updatedAt: z.string(),
     version: z.number().int(),
   })
@@ -58,6 +60,7 @@ export const updateSettingsBody = z
       }),
     riskScale,
     giving: givingSettings,
+    interpretationTargets,
     version: z.number().int().min(1),
   })
   .partial()

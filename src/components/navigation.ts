@@ -19,6 +19,7 @@ export const STAFF_NAV: NavEntry[] = [
   { label: 'Collection', icon: 'pi pi-box', route: 'artifacts', permission: { resource: 'artifact', action: 'read' } },
   { label: 'Condition', icon: 'pi pi-clipboard', route: 'condition-reports', permission: { resource: 'conditionReport', action: 'read' } },
   { label: 'Incidents', icon: 'pi pi-exclamation-triangle', route: 'incidents', permission: { resource: 'incident', action: 'read' } },
+  { label: 'Interpretation', icon: 'pi pi-book', route: 'interpretations', permission: { resource: 'interpretation', action: 'read' } },
   { label: 'Risk register', icon: 'pi pi-sort-amount-down', route: 'risks', permission: { resource: 'risk', action: 'read' } },
   { label: 'Repair projects', icon: 'pi pi-wrench', route: 'repair-projects', permission: { resource: 'repairProject', action: 'read' } },
   { label: 'Giving', icon: 'pi pi-heart', route: 'giving', permission: { resource: 'donation', action: 'read' } },

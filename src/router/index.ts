@@ -56,6 +56,7 @@ export const router = createRouter({
         { path: 'condition/:id', name: 'condition-report', component: () => import('@/views/staff/ConditionReportView.vue'), meta: { title: 'Condition report', permission: { resource: 'conditionReport', action: 'read' } } },
         { path: 'incidents', name: 'incidents', component: () => import('@/views/staff/IncidentsView.vue'), meta: { title: 'Incidents', permission: { resource: 'incident', action: 'read' } } },
         { path: 'incidents/:id', name: 'incident', component: () => import('@/views/staff/IncidentView.vue'), meta: { title: 'Incident', permission: { resource: 'incident', action: 'read' } } },
+        { path: 'interpretation', name: 'interpretations', component: () => import('@/views/staff/InterpretationsView.vue'), meta: { title: 'Interpretation', permission: { resource: 'interpretation', action: 'read' } } },
         { path: 'risks', name: 'risks', component: () => import('@/views/staff/RisksView.vue'), meta: { title: 'Risk register', permission: { resource: 'risk', action: 'read' } } },
         { path: 'repairs', name: 'repair-projects', component: () => import('@/views/staff/RepairProjectsView.vue'), meta: { title: 'Repair projects', permission: { resource: 'repairProject', action: 'read' } } },
         { path: 'repairs/:id', name: 'repair-project', component: () => import('@/views/staff/RepairProjectView.vue'), meta: { title: 'Repair project', permission: { resource: 'repairProject', action: 'read' } } },

@@ -7,6 +7,8 @@ import { DEMO_REPORTS, DEMO_RISKS } from '../../server/db/seed/demo-condition.js
 import { seedDemoCondition } from '../../server/db/seed/seed-condition.js';
 import { seedDemoRepairs } from '../../server/db/seed/seed-repairs.js';
 import { seedDemoGiving } from '../../server/db/seed/seed-giving.js';
+import { DEMO_INTERPRETATIONS } from '../../server/db/seed/demo-interpretation.js';
+import { seedDemoInterpretation } from '../../server/db/seed/seed-interpretation.js';
 import { signedInAs } from '../support/http.js';
 import { DEMO_COMPARTMENTS } from '../../server/db/seed/demo-ship-map.js';
 import { DEMO_PASSWORD, DEMO_USERS } from '../../server/db/seed/demo-data.js';
@@ -122,6 +124,15 @@ describe('demo seed', () => {
     const summed = await ctx.store.repos.donations.sumByAppeal(vessel.id);
     const kept = (await ctx.store.repos.appeals.ofVessel(vessel.id)).map(({ appeal }) => [appeal.id, appeal.raisedCents, appeal.refundedCents, appeal.giftCount]);
     expect(kept.sort()).toEqual(summed.map((r) => [r.appealId, Number(r.raisedCents), Number(r.refundedCents), Number(r.giftCount)]).sort());
+    await seedDemoInterpretation(ctx.dataSource, ctx.config);
+    const texts = (await client.get(`/api/v1/vessels/${vessel.id}/interpretations?pageSize=100`)).body.items as { state: string; differsFromPublished: boolean; hasPublished: boolean }[];
+    expect(texts).toHaveLength(DEMO_INTERPRETATIONS.length);
+    expect(texts.filter((t) => t.state === 'in-review')).toHaveLength(1);
+    expect(texts.filter((t) => t.hasPublished).length).toBe(DEMO_INTERPRETATIONS.filter((d) => d.outcome.startsWith('published')).length);
+    expect(texts.filter((t) => t.differsFromPublished)).toHaveLength(1);
+    const engine = list.items.find((a: { objectNumber: string }) => a.objectNumber === '1998.1.1');
+    const visitor = new Client(ctx.app);
+    expect((await visitor.get(`/api/v1/visit/artifacts/${engine.id}/interpretation`)).body.audiences.general.label).toContain('drove the ship for sixty years');
 
     // `npm run seed` empties all of it (an amendment refers to the report it supersedes) and starts over.
     await clearData(ctx.dataSource);

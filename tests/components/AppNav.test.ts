@@ -26,12 +26,12 @@ async function renderFor(role: Role) {
 
 describe('AppNav', () => {
   it('shows an administrator every part that exists', async () => {
-    expect(await renderFor('admin')).toEqual(['Overview', 'Vessels', 'Ship map', 'Compartments', 'Collection', 'Condition', 'Incidents', 'Risk register', 'Repair projects', 'Giving', 'People', 'Audit trail', 'Outbox', 'Settings']);
+    expect(await renderFor('admin')).toEqual(['Overview', 'Vessels', 'Ship map', 'Compartments', 'Collection', 'Condition', 'Incidents', 'Interpretation', 'Risk register', 'Repair projects', 'Giving', 'People', 'Audit trail', 'Outbox', 'Settings']);
   });
 
   it.each(ROLES.filter((r) => r !== 'admin'))('hides the administration parts from %s', async (role) => {
     // Giving shows to the roles that may read gifts (donation.read): fundraisers and curators
     const giving = role === 'fundraiser' || role === 'curator' ? ['Giving'] : [];
-    expect(await renderFor(role)).toEqual(['Overview', 'Vessels', 'Ship map', 'Compartments', 'Collection', 'Condition', 'Incidents', 'Risk register', 'Repair projects', ...giving]);
+    expect(await renderFor(role)).toEqual(['Overview', 'Vessels', 'Ship map', 'Compartments', 'Collection', 'Condition', 'Incidents', 'Interpretation', 'Risk register', 'Repair projects', ...giving]);
   });
 });

@@ -134,6 +134,47 @@ describe('RichTextEditor', () => {
   });
 });
 
+describe('RichTextEditor explainers and keyboard', () => {
+  it('inserts a boiling ladder set up in its dialog, and refuses a pressure outside the steam tables', async () => {
+    const { page, model } = await mountEditor(doc(para('The evaporator')));
+    await button(page, 'Explainer').trigger('click');
+    await flushPromises();
+    const dialog = page.get('[role=dialog]');
+    expect(dialog.text()).toContain('Insert an explainer');
+    // The defaults read as a sentence for visitors (14.7 psia boils at 212 °F).
+    expect(dialog.text()).toContain('The first stage boils at 212 °F.');
+    const pressure = dialog.get<HTMLInputElement>('input[aria-label="Stage 2 pressure"]');
+    await pressure.setValue('0.01');
+    await pressure.trigger('blur');
+    await flushPromises();
+    await dialog.get('form').trigger('submit');
+    await flushPromises();
+    expect(dialog.get('[role=alert]').text()).toContain('Second stage:');
+    expect(model.value.content?.some((n) => n.type === 'explainer')).toBe(false);
+
+    await pressure.setValue('7');
+    await pressure.trigger('blur');
+    await flushPromises();
+    await dialog.get('form').trigger('submit');
+    await frames();
+    const explainer = model.value.content?.find((n) => n.type === 'explainer');
+    expect(explainer?.attrs?.kind).toBe('boiling-ladder');
+    expect(JSON.parse(String(explainer?.attrs?.config))).toMatchObject({ stages: [{ name: 'First stage', pressure: 14.7, reading: 'psia' }, { name: 'Second stage', pressure: 7, reading: 'psia' }] });
+  });
+
+  it('moves along the toolbar with the arrow keys, with one tab stop', async () => {
+    const { page } = await mountEditor(doc(para('x')));
+    const buttons = page.findAll('[role=toolbar] button');
+    expect(buttons.filter((b) => b.attributes('tabindex') === '0')).toHaveLength(1);
+    (buttons[0]!.element as HTMLButtonElement).focus();
+    await page.get('[role=toolbar]').trigger('keydown', { key: 'ArrowRight' });
+    expect(document.activeElement?.getAttribute('aria-label')).toBe('Italic');
+    // End goes to the last button that can be used: with nothing to undo yet, Undo and Redo are disabled.
+    await page.get('[role=toolbar]').trigger('keydown', { key: 'End' });
+    expect(document.activeElement?.getAttribute('aria-label')).toBe('Explainer');
+  });
+});
+
 describe('RichTextFigures', () => {
   it('warns when a label is over its word limit', () => {
     const words = Array.from({ length: 12 }, () => 'word').join(' ');

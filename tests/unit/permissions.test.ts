@@ -78,6 +78,12 @@ const MATRIX: Record<string, Record<Role, boolean>> = {
   'media.create': { admin: false, curator: true, conservator: true, docent: true, fundraiser: false },
   'media.update': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
   'media.delete': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
+  // Interpretation: docents write and submit; only a curator approves (publishes) or returns it.
+  'interpretation.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
+  'interpretation.update': { admin: false, curator: true, conservator: false, docent: true, fundraiser: false },
+  'interpretation.submit': { admin: false, curator: true, conservator: false, docent: true, fundraiser: false },
+  'interpretation.approve': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
+  'interpretation.return': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
 };
 
 describe('permissions', () => {

@@ -1,6 +1,7 @@
 import { Column, Entity, PrimaryColumn, UpdateDateColumn, VersionColumn } from 'typeorm';
 import { DEFAULT_RISK_SCALE, type RiskScale } from '../../../shared/calc/abc-risk.js';
 import { DEFAULT_GIVING_SETTINGS, type GivingSettings } from '../../../shared/schemas/giving-settings.js';
+import { DEFAULT_INTERPRETATION_TARGETS, type InterpretationTargets } from '../../../shared/schemas/interpretation.js';
 import type { UnitSystem } from '../../../shared/schemas/settings.js';
 
 /** The organisation's settings: a single row with id 1. */
@@ -35,6 +36,9 @@ export class OrganisationSettingsEntity {
   /** Gift bounds and presets in cents, and what acknowledgments say (shared/schemas/giving-settings.ts). */
   @Column({ type: 'simple-json', default: JSON.stringify(DEFAULT_GIVING_SETTINGS) })
   giving: GivingSettings;
+  /** Word and grade targets of interpretive text (shared/schemas/interpretation.ts). */
+  @Column({ type: 'simple-json', default: JSON.stringify(DEFAULT_INTERPRETATION_TARGETS) })
+  interpretationTargets: InterpretationTargets;
 
   @UpdateDateColumn({ type: 'datetime' })
   updatedAt: Date;

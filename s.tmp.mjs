@@ -1,0 +1,16 @@
+import { chromium } from 'playwright-core';
+const [,, path, out, email = 'curator@shipkeeper.test', width = '1400'] = process.argv;
+const b = await chromium.launch({ executablePath: '/usr/bin/chromium' });
+const page = await b.newPage({ viewport: { width: Number(width), height: 900 } });
+page.on('console', (m) => { if (m.type() === 'error' || m.type() === 'warning') console.log('CONSOLE', m.text().slice(0, 500)); });
+page.on('pageerror', (e) => console.log('PAGEERR', e.message));
+await page.goto('http://localhost:3100/sign-in');
+await page.getByLabel('E-mail').fill(email);
+await page.getByLabel('Password').fill('brass-gauge-harbour-lamp');
+await page.getByRole('button', { name: 'Sign in' }).click();
+await page.waitForURL('**/app');
+await page.goto('http://localhost:3100' + path);
+await page.waitForTimeout(3000);
+await page.screenshot({ path: out, fullPage: true });
+console.log((await page.locator('main').innerText()).slice(0, 1500));
+await b.close();
