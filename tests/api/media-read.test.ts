@@ -25,6 +25,7 @@ const EXPECTED: Record<MediaOwnerType, Record<Who, 200 | 401 | 403>> = {
   compartment: ALL_STAFF,
   incident: ALL_STAFF,
   'condition-report': FINDINGS_READERS,
+  tour: ALL_STAFF,
 };
 
 const FINDING_TEXT = 'Pitting under the flaking lagging near the flange';

@@ -10,6 +10,7 @@ import { HazardVersions1796284659278 } from './1796284659278-HazardVersions.js';
 import { SearchStemming1796285944020 } from './1796285944020-SearchStemming.js';
 import { MediaPublicUse1796286347768 } from './1796286347768-MediaPublicUse.js';
 import { DeckFramesRiskScale1796298366780 } from './1796298366780-DeckFramesRiskScale.js';
+import { Tours1796410076474 } from './1796410076474-Tours.js';
 
 /** Every migration, oldest first; run at start by openDatabase(). */
-export const migrations = [Foundation1796204951114, ShipMap1796208163044, DeckPlans1796208850383, Collection1796215405776, ConditionReports1796217167359, Incidents1796217615866, Risks1796217692917, IncidentPublicNote1796284572668, HazardVersions1796284659278, SearchStemming1796285944020, MediaPublicUse1796286347768, DeckFramesRiskScale1796298366780];
+export const migrations = [Foundation1796204951114, ShipMap1796208163044, DeckPlans1796208850383, Collection1796215405776, ConditionReports1796217167359, Incidents1796217615866, Risks1796217692917, IncidentPublicNote1796284572668, HazardVersions1796284659278, SearchStemming1796285944020, MediaPublicUse1796286347768, DeckFramesRiskScale1796298366780, Tours1796410076474];
