@@ -33,6 +33,12 @@ import { hazardRoutes } from './routes/hazards.routes.js';
 import { planRoutes } from './routes/plans.routes.js';
 import { invitationRoutes } from './routes/invitations.routes.js';
 import { publicRoutes } from './routes/public.routes.js';
+import { tourReviewRoutes } from './routes/tour-review.routes.js';
+import { tourRoutes } from './routes/tours.routes.js';
+import { TourPublicService } from './services/tour-public.service.js';
+import { TourReviewService } from './services/tour-review.service.js';
+import { TourRevisionService } from './services/tour-revisions.service.js';
+import { TourService } from './services/tour.service.js';
 import { userRoutes } from './routes/users.routes.js';
 import { vesselRoutes } from './routes/vessels.routes.js';
 import { ArtifactImportService } from './services/artifact-import.service.js';
@@ -124,7 +130,11 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
   const closures = new ClosureService(store);
   incidentRoutes(api, new IncidentService(store, conditionReports, alerts), closures);
   riskRoutes(api, new RiskService(store));
-  mediaRoutes(api, new MediaService(store, files), { incomingDir: files.incoming, maxBytes: config.mediaMaxBytes });
+  const media = new MediaService(store, files);
+  mediaRoutes(api, media, { incomingDir: files.incoming, maxBytes: config.mediaMaxBytes });
+  const tours = new TourService(store, closures);
+  tourRoutes(api, tours, media, { incomingDir: files.incoming, maxBytes: config.mediaMaxBytes });
+  tourReviewRoutes(api, new TourReviewService(store, tours, closures, mailer, config), new TourRevisionService(store, tours));
   calcRoutes(api);
   adminRoutes(api, { audit: new AuditService(store), settings, outbox: new OutboxService(fakeMail) });
   const backups = new BackupService(config);
@@ -135,6 +145,7 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
     vessels,
     settings,
     closures,
+    tours: new TourPublicService(store, media),
     openApi: () => (openApi ??= buildOpenApiDocument(api.routes, version)),
   });
 

@@ -103,6 +103,21 @@ export class MediaService {
     return { path: derivativeFile(this.files.path(media.storageKey), variant), type: 'image/webp', name: `${path.parse(media.fileName).name}-${variant}.webp` };
   }
 
+  /**
+   * A file that a published record shows the public (a published tour lists its files; the caller
+   * has checked that it does): a photo's WebP derivative, never an original, or an audio clip.
+   */
+  async publicFile(id: number, variant: 'thumb' | 'display' | 'audio') {
+    const media = await this.store.repos.media.findById(id);
+    if (!media) throw new NotFoundError('The file');
+    if (variant === 'audio') {
+      if (media.kind !== 'audio') throw new NotFoundError('The audio clip');
+      return { path: this.files.path(path.join(media.storageKey, `original.${EXTENSIONS[media.mimeType]}`)), type: media.mimeType.split(';')[0]!, name: media.fileName };
+    }
+    if (media.kind !== 'photo') throw new NotFoundError('A preview of this file');
+    return { path: derivativeFile(this.files.path(media.storageKey), variant), type: 'image/webp', name: `${path.parse(media.fileName).name}-${variant}.webp` };
+  }
+
   /** Checks and keeps one uploaded file; the temporary file is always consumed. */
   async upload(query: MediaOwnerQuery, file: UploadedFile | undefined, viewer: Express.User, actor: Actor, accepts: UploadAccepts = 'photo-or-document') {
     if (!file) throw new ValidationError({ file: accepts === 'audio' ? 'Choose an MP3, M4A or Ogg file to upload.' : 'Choose a photo or PDF to upload.' });

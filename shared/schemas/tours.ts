@@ -183,8 +183,8 @@ export type CreateStopBody = z.input<typeof createStopBody>;
 export const updateStopBody = z.object({ ...stopFields, version: z.number().int().min(1) }).partial().required({ version: true }).meta({ id: 'UpdateTourStopBody' });
 export type UpdateStopBody = z.infer<typeof updateStopBody>;
 
-/** The new order: every stop id of the tour once; with the tour's version. */
-export const reorderStopsBody = z.object({ stopIds: z.array(z.number().int().positive()).min(1).max(200), version: z.number().int().min(1) }).meta({ id: 'ReorderStopsBody' });
+/** The new order: every stop id of the tour once (409 when the stops changed meanwhile). */
+export const reorderStopsBody = z.object({ stopIds: z.array(z.number().int().positive()).min(1).max(200) }).meta({ id: 'ReorderStopsBody' });
 export const versionBody = z.object({ version: z.number().int().min(1) }).meta({ id: 'VersionBody' });
 export const returnTourBody = z.object({ version: z.number().int().min(1), comment: text(4000, 'Comment', 'free') }).meta({ id: 'ReturnTourBody' });
 export const approveTourBody = z.object({ version: z.number().int().min(1), comment: freeText(4000, 'Comment').default('') }).meta({ id: 'ApproveTourBody' });
@@ -257,7 +257,8 @@ export const updateTourRouteSettingsBody = z
   .object({
     walkingPaceMetresPerSecond: z.number({ error: 'Give the walking pace in metres per second.' }).min(0.1, 'At least 0.1 m/s.').max(2, 'At most 2 m/s.'),
     deckChangeMetres: z.number({ error: 'Give the allowance per deck change in metres.' }).min(0, 'Cannot be negative.').max(200, 'At most 200 m.'),
-    version: z.number().int().min(1),
+    /** 0 while the vessel uses the defaults. */
+    version: z.number().int().min(0),
   })
   .meta({ id: 'UpdateTourRouteSettingsBody' });
 
@@ -292,6 +293,7 @@ export const publicTourSummary = z.object({
   stopCount: z.number().int(),
   distanceMetres: z.number(),
   durationMinutes: z.number(),
+  cover: z.object({ src: z.string(), alt: z.string() }).nullable(),
   publishedAt: z.string(),
 });
 export const publicTour = publicTourSummary.extend({ stops: z.array(publicTourStop) }).meta({ id: 'PublicTour' });

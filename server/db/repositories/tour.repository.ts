@@ -47,6 +47,11 @@ export class TourRepository {
     return this.repo.save(this.repo.create({ ...fields, state: 'draft', revision: 0 }));
   }
 
+  /** The revision counter, keeping the version as it is (giving it stops TypeORM from raising it). */
+  async setRevision(id: number, revision: number, version: number) {
+    await this.repo.update({ id }, { revision, version });
+  }
+
   save(tour: TourEntity) {
     return this.repo.save(tour);
   }
