@@ -28,6 +28,7 @@ import { compartmentRoutes } from './routes/compartments.routes.js';
 import { conditionReportRoutes } from './routes/condition-reports.routes.js';
 import { incidentRoutes } from './routes/incidents.routes.js';
 import { riskRoutes } from './routes/risks.routes.js';
+import { repairProjectRoutes } from './routes/repair-projects.routes.js';
 import { deckRoutes } from './routes/decks.routes.js';
 import { hazardRoutes } from './routes/hazards.routes.js';
 import { planRoutes } from './routes/plans.routes.js';
@@ -39,6 +40,14 @@ import { TourPublicService } from './services/tour-public.service.js';
 import { TourReviewService } from './services/tour-review.service.js';
 import { TourRevisionService } from './services/tour-revisions.service.js';
 import { TourService } from './services/tour.service.js';
+import { donationRoutes } from './routes/donations.routes.js';
+import { givingPublicRoutes } from './routes/giving.routes.js';
+import { AppealService } from './services/appeal.service.js';
+import { CheckoutService } from './services/checkout.service.js';
+import { DonationService } from './services/donation.service.js';
+import { GivingReceipts } from './services/giving-receipts.js';
+import { StripeWebhookService } from './services/stripe-webhook.service.js';
+import { createStripeClient, type StripeClient } from './payments/stripe-client.js';
 import { userRoutes } from './routes/users.routes.js';
 import { vesselRoutes } from './routes/vessels.routes.js';
 import { ArtifactImportService } from './services/artifact-import.service.js';
@@ -53,6 +62,8 @@ import { ConditionReportService } from './services/condition-report.service.js';
 import { IncidentService } from './services/incident.service.js';
 import { ClosureService } from './services/closure.service.js';
 import { RiskService } from './services/risk.service.js';
+import { RepairProjectService } from './services/repair-project.service.js';
+import { TreatmentService } from './services/treatment.service.js';
 import { DeckService } from './services/deck.service.js';
 import { HazardService } from './services/hazard.service.js';
 import { PlanService } from './services/plan.service.js';
@@ -66,10 +77,14 @@ import { UserService } from './services/user.service.js';
 import { VesselService } from './services/vessel.service.js';
 import { appVersion as version } from './version.js';
 
+const WEBHOOK_PATH = '/api/v1/webhooks/stripe';
+
 export interface AppDeps {
   config: Config;
   dataSource: DataSource;
   fakeMail: FakeMailServer | null;
+  /** The Stripe SDK, built once for Stripe or the fake (index.ts knows the fake's port). */
+  stripe?: StripeClient;
 }
 
 export interface ShipkeeperApp {
@@ -100,7 +115,7 @@ function absoluteTimeout(hours: number): RequestHandler {
   };
 }
 
-export function createApp({ config, dataSource, fakeMail }: AppDeps): ShipkeeperApp {
+export function createApp({ config, dataSource, fakeMail, stripe = createStripeClient(config.stripe) }: AppDeps): ShipkeeperApp {
   const store = new Store(dataSource);
   const sessions = new DatabaseSessionStore(dataSource, config.sessionIdleMinutes * 60_000);
   const mailer = new Mailer(config.mail, fakeMail?.port ?? null);
@@ -130,6 +145,7 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
   const closures = new ClosureService(store);
   incidentRoutes(api, new IncidentService(store, conditionReports, alerts), closures);
   riskRoutes(api, new RiskService(store));
+  repairProjectRoutes(api, new RepairProjectService(store), new TreatmentService(store));
   const media = new MediaService(store, files);
   mediaRoutes(api, media, { incomingDir: files.incoming, maxBytes: config.mediaMaxBytes });
   const tours = new TourService(store, closures);
@@ -137,6 +153,10 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
   tourReviewRoutes(api, new TourReviewService(store, tours, closures, mailer, config), new TourRevisionService(store, tours));
   calcRoutes(api);
   adminRoutes(api, { audit: new AuditService(store), settings, outbox: new OutboxService(fakeMail) });
+  const webhooks = new StripeWebhookService(store, stripe, new GivingReceipts(store, mailer));
+  const checkout = new CheckoutService(store, stripe, webhooks, config.publicUrl);
+  givingPublicRoutes(api, { checkout, webhooks, files });
+  donationRoutes(api, new DonationService(store, stripe, webhooks), new AppealService(store));
   const backups = new BackupService(config);
   backupRoutes(api, backups);
   let openApi: object | null = null;
@@ -183,6 +203,8 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
       res.sendFile(indexHtml);
     });
   }
+  // Stripe signs the body as sent: the webhook keeps it raw (and body-parser's json then leaves it alone)
+  app.use(WEBHOOK_PATH, express.raw({ type: () => true, limit: '1mb' }));
   app.use(express.json({ limit: '1mb' }));
   app.use(cookieParser());
   app.use('/api/v1', (req, _res, next) => {
@@ -212,7 +234,8 @@ export function createApp({ config, dataSource, fakeMail }: AppDeps): Shipkeeper
     res.setHeader('Cache-Control', 'no-store');
     next();
   });
-  app.use('/api/v1', csrf.protect, api.router);
+  // Stripe's calls carry no cookie and no token: their signature is their proof (checked in the route)
+  app.use('/api/v1', (req, res, next) => (req.originalUrl.split('?')[0] === WEBHOOK_PATH ? next() : csrf.protect(req, res, next)), api.router);
   app.use('/api', apiNotFound);
 
   app.use(errorHandler);

@@ -5,9 +5,12 @@ import { seedDemo } from './db/seed/seed.js';
 import { seedDemoPlans } from './db/seed/seed-plans.js';
 import { seedDemoCollection } from './db/seed/seed-collection.js';
 import { seedDemoCondition } from './db/seed/seed-condition.js';
+import { seedDemoRepairs } from './db/seed/seed-repairs.js';
+import { seedDemoGiving } from './db/seed/seed-giving.js';
 import { DEMO_PASSWORD, DEMO_USERS } from './db/seed/demo-data.js';
 import { FakeMailServer } from './fakes/mail-server.js';
 import { FakeStripeServer } from './fakes/stripe/server.js';
+import { createStripeClient } from './payments/stripe-client.js';
 
 const config = loadConfig();
 if (config.secureCookies && !config.trustProxy) {
@@ -28,7 +31,6 @@ if (!config.mail.host) {
 
 let fakeStripe: FakeStripeServer | null = null;
 if (!config.stripe.secretKey) {
-  // Webhooks are delivered once the app has its endpoint for them (the giving work); until then none is set.
   fakeStripe = new FakeStripeServer();
   const port = await fakeStripe.start(config.stripe.fakePort);
   console.log(`Local fake of the Stripe API on 127.0.0.1:${port} (no STRIPE_SECRET_KEY set); test key sk_test_shipkeeper_local.`);
@@ -38,15 +40,23 @@ if (config.seedOnStart && (await seedDemo(dataSource, { bcryptCost: config.bcryp
   await seedDemoPlans(dataSource, config);
   await seedDemoCollection(dataSource, config);
   await seedDemoCondition(dataSource, config);
+  await seedDemoRepairs(dataSource, config);
+  // after the repair projects' demo: it appeals for the fundraising ones
+  await seedDemoGiving(dataSource);
   console.log(`Demo data seeded. Sign in as ${DEMO_USERS.map((u) => u.email).join(', ')} with the password "${DEMO_PASSWORD}".`);
 }
 
-const shipkeeper = createApp({ config, dataSource, fakeMail });
+const stripe = createStripeClient(config.stripe, fakeStripe?.port ?? config.stripe.fakePort);
+const shipkeeper = createApp({ config, dataSource, fakeMail, stripe });
 await shipkeeper.files.ensure();
 await shipkeeper.plans.recoverInterrupted();
 shipkeeper.backups.schedule();
 const server = shipkeeper.app.listen(config.port, config.host, () => {
   console.log(`Shipkeeper is running at ${config.publicUrl}`);
+  if (fakeStripe) {
+    // The fake signs and posts its events to our endpoint, retrying with backoff until it answers 2xx.
+    fakeStripe.setWebhookUrl(`http://127.0.0.1:${config.port}/api/v1/webhooks/stripe`);
+  }
   console.log(`Daily backup at ${String(config.backupHour).padStart(2, '0')}:00 server time into ${config.backupDir} (keeping ${config.backupKeep}).`);
 });
 

@@ -55,3 +55,22 @@ export function exampleAction(hazards: readonly HazardKind[], damageType: Damage
   if (damageType === 'lagging-damage') return 'e.g. Have the lagging tested for asbestos before any repair';
   return 'e.g. Wire-brush, prime and topcoat the affected area';
 }
+
+/** Work a repair's scope may involve, each with its caution (common practice; the rules behind them, from memory: OSHA shipyard hot work, 29 CFR 1915 subpart B and 1915.14; the lead and asbestos rules above). */
+export const REPAIR_WORK_CAUTIONS = {
+  hotWork: {
+    label: 'Hot work',
+    caution: `Welding, cutting, brazing or grinding needs a hot-work permit, a fire watch and, in or next to a space that held fuel or has coated or lagged surfaces, a marine chemist’s certificate first. Have it done by licensed contractors. ${DEFER}`,
+  },
+  asbestos: { label: 'Asbestos-containing material', caution: HAZARD_CAUTIONS.asbestos },
+  leadPaint: { label: 'Lead-based paint', caution: HAZARD_CAUTIONS['lead-paint'] },
+} as const;
+export type RepairWorkKind = keyof typeof REPAIR_WORK_CAUTIONS;
+
+/** What every cautioned repair says: we record the plan, licensed people make the work safe. */
+export const REPAIR_DEFERRAL =
+  'Shipkeeper records the plan; it never declares work safe. Hazardous work is for licensed contractors, under the site safety plan and local codes.';
+
+export function repairWorkCautions(flags: Partial<Record<RepairWorkKind, boolean>>): { kind: RepairWorkKind; label: string; caution: string }[] {
+  return (Object.keys(REPAIR_WORK_CAUTIONS) as RepairWorkKind[]).filter((k) => flags[k]).map((kind) => ({ kind, ...REPAIR_WORK_CAUTIONS[kind] }));
+}

@@ -32,6 +32,13 @@ export const PERMISSIONS = {
   incident: { read: STAFF, create: ['conservator', 'curator', 'docent'], update: ['conservator', 'curator'] },
   /** Docents write tours and submit them; curators publish (their own work too). */
   tour: { read: STAFF, create: ['docent', 'curator'], update: ['docent', 'curator'], submit: ['docent', 'curator'], comment: ['docent', 'curator'], approve: CURATOR, return: CURATOR, retire: CURATOR },
+  /** Approving is the curator's alone: the service refuses a conservator's approval (changeStatus covers the other steps). */
+  repairProject: { read: STAFF, create: ['curator', 'conservator'], update: ['curator', 'conservator'], changeStatus: ['curator', 'conservator'] },
+  treatment: { read: STAFF, create: ['conservator', 'curator'], update: ['conservator', 'curator'] },
+  /** The public appeal of a repair project: fundraisers run it, curators may edit it too. */
+  appeal: { read: STAFF, update: ['fundraiser', 'curator', 'admin'] },
+  /** Gifts: donors' e-mail addresses, refunds and exports are for fundraisers and administrators only. */
+  donation: { read: ['fundraiser', 'admin', 'curator'], readDonor: ['fundraiser', 'admin'], refund: ['fundraiser', 'admin'], export: ['fundraiser', 'admin'] },
   media: { read: STAFF, create: ['curator', 'conservator', 'docent'], update: ['curator', 'conservator'], delete: ['curator', 'conservator'] },
 } as const satisfies Record<string, Record<string, readonly Role[]>>;
 
@@ -63,6 +70,8 @@ export const MEDIA_OWNERS = {
   'condition-report': { resource: 'conditionReport', read: 'readFindings' },
   /** A tour's cover photo and its stops' audio. */
   tour: { resource: 'tour', read: 'read' },
+  'treatment-before': { resource: 'treatment', read: 'read' },
+  'treatment-after': { resource: 'treatment', read: 'read' },
 } as const satisfies Record<MediaOwnerType, { resource: Resource; read: string; attach?: string }>;
 
 /** Whether the role may see the files of this kind of record: listed, described or served, in any response. */

@@ -1,9 +1,13 @@
 import type { DataSource, EntityManager } from 'typeorm';
+import { AppealRepository } from './repositories/appeal.repository.js';
+import { DonationRepository } from './repositories/donation.repository.js';
 import { ArtifactMoveRepository } from './repositories/artifact-move.repository.js';
 import { ArtifactRepository } from './repositories/artifact.repository.js';
 import { ConditionReportRepository } from './repositories/condition-report.repository.js';
 import { IncidentRepository } from './repositories/incident.repository.js';
 import { RiskRepository } from './repositories/risk.repository.js';
+import { RepairProjectRepository } from './repositories/repair-project.repository.js';
+import { TreatmentRepository } from './repositories/treatment.repository.js';
 import { AuditEventRepository } from './repositories/audit-event.repository.js';
 import { CompartmentRepository } from './repositories/compartment.repository.js';
 import { DeckRepository } from './repositories/deck.repository.js';
@@ -44,6 +48,10 @@ export interface Repositories {
   tourStops: TourStopRepository;
   tourRevisions: TourRevisionRepository;
   tourRouteSettings: TourRouteSettingsRepository;
+  repairProjects: RepairProjectRepository;
+  treatments: TreatmentRepository;
+  appeals: AppealRepository;
+  donations: DonationRepository;
 }
 
 function repositories(manager: EntityManager): Repositories {
@@ -69,6 +77,10 @@ function repositories(manager: EntityManager): Repositories {
     tourStops: new TourStopRepository(manager),
     tourRevisions: new TourRevisionRepository(manager),
     tourRouteSettings: new TourRouteSettingsRepository(manager),
+    repairProjects: new RepairProjectRepository(manager),
+    treatments: new TreatmentRepository(manager),
+    appeals: new AppealRepository(manager),
+    donations: new DonationRepository(manager),
   };
 }
 

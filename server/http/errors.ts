@@ -74,3 +74,10 @@ export class InvalidRichTextError extends ApiError {
     super(422, 'invalid_rich_text', message, { [field]: message });
   }
 }
+
+/** A service we depend on (the payment provider) cannot be reached; nothing was recorded. */
+export class ServiceUnavailableError extends ApiError {
+  constructor(message: string) {
+    super(503, 'unavailable', message);
+  }
+}

@@ -1,3 +1,4 @@
+import { DEFAULT_GIVING_SETTINGS } from '../../shared/schemas/giving-settings.js';
 import type { OrganisationSettings } from '../../shared/schemas/settings.js';
 import type { OrganisationSettingsEntity } from '../db/entities/organisation-settings.entity.js';
 
@@ -10,6 +11,7 @@ export function presentSettings(settings: OrganisationSettingsEntity): Organisat
     contactEmail: settings.contactEmail,
     objectNumberPattern: settings.objectNumberPattern,
     riskScale: settings.riskScale,
+    giving: { ...DEFAULT_GIVING_SETTINGS, ...settings.giving },
     updatedAt: settings.updatedAt.toISOString(),
     version: settings.version,
   };

@@ -16,7 +16,7 @@ import { derivativeFile, makeDerivatives, type PhotoFacts } from './media-deriva
 import type { UploadedFile } from './plan.service.js';
 
 const EXTENSIONS: Record<string, string> = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp', 'application/pdf': 'pdf', 'audio/mpeg': 'mp3', 'audio/x-m4a': 'm4a', 'audio/ogg': 'ogg', 'audio/ogg; codecs=opus': 'opus' };
-const OWNER_LABELS: Record<MediaOwnerType, string> = { artifact: 'an artifact', compartment: 'a compartment', 'condition-report': 'a condition report', incident: 'an incident', tour: 'a tour' };
+const OWNER_LABELS: Record<MediaOwnerType, string> = { artifact: 'an artifact', compartment: 'a compartment', 'condition-report': 'a condition report', incident: 'an incident', 'treatment-before': 'a treatment', 'treatment-after': 'a treatment', tour: 'a tour' };
 
 /** What an upload may be: a photo or a PDF on any record, or an audio clip on a tour. */
 export type UploadAccepts = 'photo-or-document' | 'audio';
@@ -66,6 +66,11 @@ export class MediaService {
       const tour = await repos.tours.findPlain(ownerId);
       if (!tour) throw new NotFoundError('The tour');
       return { vesselId: tour.vesselId, label: `tour ${tour.title}` };
+    }
+    if (ownerType === 'treatment-before' || ownerType === 'treatment-after') {
+      const treatment = await repos.treatments.findById(ownerId);
+      if (!treatment) throw new NotFoundError('The treatment');
+      return { vesselId: treatment.vesselId, label: `treatment ${treatment.id} (${ownerType === 'treatment-before' ? 'before' : 'after'})` };
     }
     const compartment = await repos.compartments.findById(ownerId);
     if (!compartment) throw new NotFoundError('The compartment');

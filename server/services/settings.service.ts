@@ -19,7 +19,7 @@ export class SettingsService {
         throw new StaleVersionError('the settings', settings.version, 'them');
       }
       const { version: _version, ...fields } = body;
-      const changes = changesBetween(settings, fields, ['organisationName', 'country', 'currency', 'unitSystem', 'contactEmail', 'objectNumberPattern', 'riskScale']);
+      const changes = changesBetween(settings, fields, ['organisationName', 'country', 'currency', 'unitSystem', 'contactEmail', 'objectNumberPattern', 'riskScale', 'giving']);
       if (!changes) return settings;
       Object.assign(settings, fields);
       const saved = await repos.settings.save(settings);

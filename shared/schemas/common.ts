@@ -48,6 +48,7 @@ export const ERROR_CODES = [
   'malformed_upload',
   'rate_limited',
   'internal',
+  'unavailable',
 ] as const;
 export type ErrorCode = (typeof ERROR_CODES)[number];
 

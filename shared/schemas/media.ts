@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { freeText, line } from './text.js';
 
-export const MEDIA_OWNER_TYPES = ['artifact', 'compartment', 'condition-report', 'incident', 'tour'] as const;
+/** A treatment's photos are of two kinds, before and after the work: one owner type each. */
+export const MEDIA_OWNER_TYPES = ['artifact', 'compartment', 'condition-report', 'incident', 'treatment-before', 'treatment-after', 'tour'] as const;
 export type MediaOwnerType = (typeof MEDIA_OWNER_TYPES)[number];
 
 export const MEDIA_KINDS = ['photo', 'document', 'audio'] as const;
@@ -55,7 +56,7 @@ export type Media = z.infer<typeof media>;
 export const mediaList = z.array(media);
 
 export const mediaOwnerQuery = z.object({
-  ownerType: z.enum(MEDIA_OWNER_TYPES, { error: 'Say what the file belongs to: artifact, compartment, condition-report, incident or tour.' }),
+  ownerType: z.enum(MEDIA_OWNER_TYPES, { error: 'Say what the file belongs to: artifact, compartment, condition-report, incident, treatment-before, treatment-after or tour.' }),
   ownerId: z.coerce.number({ error: 'Give the id of the record the file belongs to.' }).int().positive(),
 });
 export type MediaOwnerQuery = z.infer<typeof mediaOwnerQuery>;

@@ -28,17 +28,18 @@ function firstTextProblem(node: RichTextNode, label: string): string | null {
   return null;
 }
 
-// One object behind the lazy reference, with an id, so that the OpenAPI document refers to it instead of recursing.
-const nodeObject: z.ZodType<RichTextNode> = z
+// A named object with a getter is how zod 4 declares a recursive schema; the OpenAPI generator then writes a $ref to it.
+const node: z.ZodType<RichTextNode> = z
   .object({
     type: z.string().max(40),
     text: z.string().optional(),
     attrs: z.record(z.string(), z.unknown()).optional(),
-    content: z.array(z.lazy(() => nodeObject)).max(5000).optional(),
+    get content() {
+      return z.array(node).max(5000).optional();
+    },
     marks: z.array(z.object({ type: z.string().max(40), attrs: z.record(z.string(), z.unknown()).optional() })).max(10).optional(),
   })
   .meta({ id: 'RichTextNode' });
-const node = nodeObject;
 
 /** A tiptap (ProseMirror) JSON document; its text obeys the character rule of free text. */
 export function richTextDoc(label = 'Text') {

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { riskScaleProblems } from '../calc/abc-risk.js';
 import { PATTERN_PROBLEM_MESSAGES, patternProblem } from '../calc/object-number.js';
+import { givingSettings } from './giving-settings.js';
 import { refuseInvalidCharacters, text } from './text.js';
 
 export const UNIT_SYSTEMS = ['us-customary', 'metric'] as const;
@@ -34,6 +35,7 @@ export const organisationSettings = z
     contactEmail: z.string(),
     objectNumberPattern: z.string(),
     riskScale,
+    giving: givingSettings,
     updatedAt: z.string(),
     version: z.number().int(),
   })
@@ -55,6 +57,7 @@ export const updateSettingsBody = z
         if (problem) ctx.addIssue({ code: 'custom', message: PATTERN_PROBLEM_MESSAGES[problem] });
       }),
     riskScale,
+    giving: givingSettings,
     version: z.number().int().min(1),
   })
   .partial()

@@ -29,7 +29,13 @@ export const router = createRouter({
     {
       path: '/visit',
       component: () => import('@/views/visit/VisitLayout.vue'),
-      children: [{ path: '', name: 'visit-home', component: () => import('@/views/visit/VisitHomeView.vue'), meta: { title: 'Visit' } }],
+      children: [
+        { path: '', name: 'visit-home', component: () => import('@/views/visit/VisitHomeView.vue'), meta: { title: 'Visit' } },
+        { path: 'appeals', name: 'visit-appeals', component: () => import('@/views/visit/VisitAppealsView.vue'), meta: { title: 'Help us repair' } },
+        { path: 'appeals/:slug', name: 'visit-appeal', component: () => import('@/views/visit/VisitAppealView.vue'), meta: { title: 'Help us repair' } },
+        { path: 'appeals/:slug/thanks', name: 'visit-gift-thanks', component: () => import('@/views/visit/VisitGiftThanksView.vue'), meta: { title: 'Thank you' } },
+        { path: 'appeals/:slug/cancelled', name: 'visit-gift-cancelled', component: () => import('@/views/visit/VisitGiftCancelledView.vue'), meta: { title: 'Gift not made' } },
+      ],
     },
     {
       path: '/app',
@@ -49,6 +55,9 @@ export const router = createRouter({
         { path: 'incidents', name: 'incidents', component: () => import('@/views/staff/IncidentsView.vue'), meta: { title: 'Incidents', permission: { resource: 'incident', action: 'read' } } },
         { path: 'incidents/:id', name: 'incident', component: () => import('@/views/staff/IncidentView.vue'), meta: { title: 'Incident', permission: { resource: 'incident', action: 'read' } } },
         { path: 'risks', name: 'risks', component: () => import('@/views/staff/RisksView.vue'), meta: { title: 'Risk register', permission: { resource: 'risk', action: 'read' } } },
+        { path: 'repairs', name: 'repair-projects', component: () => import('@/views/staff/RepairProjectsView.vue'), meta: { title: 'Repair projects', permission: { resource: 'repairProject', action: 'read' } } },
+        { path: 'repairs/:id', name: 'repair-project', component: () => import('@/views/staff/RepairProjectView.vue'), meta: { title: 'Repair project', permission: { resource: 'repairProject', action: 'read' } } },
+        { path: 'giving', name: 'giving', component: () => import('@/views/staff/GivingView.vue'), meta: { title: 'Giving', permission: { resource: 'donation', action: 'read' } } },
         { path: 'people', name: 'people', component: () => import('@/views/staff/PeopleView.vue'), meta: { title: 'People', permission: { resource: 'user', action: 'read' } } },
         { path: 'audit-trail', name: 'audit-trail', component: () => import('@/views/staff/AuditTrailView.vue'), meta: { title: 'Audit trail', permission: { resource: 'auditEvent', action: 'read' } } },
         { path: 'outbox', name: 'outbox', component: () => import('@/views/staff/OutboxView.vue'), meta: { title: 'Outbox', permission: { resource: 'outbox', action: 'read' } } },

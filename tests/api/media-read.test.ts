@@ -15,7 +15,7 @@ import { createTestApp, type TestApp } from '../support/test-app.js';
  */
 type Who = Role | 'anonymous';
 const WHO: Who[] = [...ROLES, 'anonymous'];
-const OWNER_TYPES: MediaOwnerType[] = ['artifact', 'compartment', 'incident', 'condition-report'];
+const OWNER_TYPES: MediaOwnerType[] = ['artifact', 'compartment', 'incident', 'condition-report', 'treatment-before', 'treatment-after'];
 
 const ALL_STAFF: Record<Who, 200 | 401 | 403> = { admin: 200, curator: 200, conservator: 200, docent: 200, fundraiser: 200, anonymous: 401 };
 /** Condition evidence: for the roles that read findings (the screen tells the others it is reserved). */
@@ -26,6 +26,9 @@ const EXPECTED: Record<MediaOwnerType, Record<Who, 200 | 401 | 403>> = {
   incident: ALL_STAFF,
   'condition-report': FINDINGS_READERS,
   tour: ALL_STAFF,
+  // A treatment's photos show the work done, for every staff role (the fundraiser tells its story).
+  'treatment-before': ALL_STAFF,
+  'treatment-after': ALL_STAFF,
 };
 
 const FINDING_TEXT = 'Pitting under the flaking lagging near the flange';
@@ -71,6 +74,12 @@ beforeAll(async () => {
     photoId: await upload(conservator, 'condition-report', reportId, jpeg, 'flange.jpg'),
     documentId: await upload(conservator, 'condition-report', reportId, tinyPdf(), 'lab.pdf'),
   };
+  const project = await conservator.post(`/api/v1/vessels/${vesselId}/repair-projects`, { title: 'Gauge glass', slug: 'gauge-glass', scope: { type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text: 'Replace the glass.' }] }] } });
+  expect(project.status, JSON.stringify(project.body)).toBe(201);
+  const treatment = await conservator.post(`/api/v1/repair-projects/${project.body.id}/treatments`, { performedOn: '2026-11-25', contractorName: 'Harbour Glaziers', method: 'New glass bedded in putty.' });
+  expect(treatment.status, JSON.stringify(treatment.body)).toBe(201);
+  owners['treatment-before'] = { ownerId: treatment.body.id, photoId: await upload(conservator, 'treatment-before', treatment.body.id, jpeg, 'before.jpg') };
+  owners['treatment-after'] = { ownerId: treatment.body.id, photoId: await upload(conservator, 'treatment-after', treatment.body.id, jpeg, 'after.jpg') };
 
   const finding = await conservator.post(`/api/v1/condition-reports/${reportId}/findings`, {
     agent: 'incorrect-relative-humidity',

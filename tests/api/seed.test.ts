@@ -5,6 +5,7 @@ import { seedDemoCollection } from '../../server/db/seed/seed-collection.js';
 import { DEMO_ARTIFACTS } from '../../server/db/seed/demo-collection.js';
 import { DEMO_REPORTS, DEMO_RISKS } from '../../server/db/seed/demo-condition.js';
 import { seedDemoCondition } from '../../server/db/seed/seed-condition.js';
+import { seedDemoRepairs } from '../../server/db/seed/seed-repairs.js';
 import { signedInAs } from '../support/http.js';
 import { DEMO_COMPARTMENTS } from '../../server/db/seed/demo-ship-map.js';
 import { DEMO_PASSWORD, DEMO_USERS } from '../../server/db/seed/demo-data.js';
@@ -97,6 +98,19 @@ describe('demo seed', () => {
     const second = (await client.get(`/api/v1/vessels/${vessel.id}/decks`)).body.find((d: { name: string }) => d.name === 'Second deck');
     const overlay = (await client.get(`/api/v1/decks/${second.id}/condition`)).body.compartments;
     expect(overlay.filter((c: { grade: string | null }) => c.grade).length).toBeGreaterThanOrEqual(3);
+
+    // Repair projects from the findings: two fundraising, one complete with a treatment, its photos and the survey after it.
+    await seedDemoRepairs(ctx.dataSource, ctx.config);
+    const repairs = (await client.get(`/api/v1/vessels/${vessel.id}/repair-projects?sort=title`)).body.items;
+    expect(repairs.map((r: { slug: string; status: string }) => `${r.slug} ${r.status}`)).toEqual(['gauge-board-glasses complete', 'shaft-alley-water-ingress fundraising', 'steering-gear-room-deckhead fundraising']);
+    const keeper = (await signedInAs(ctx.app, ctx.store, 'conservator')).client;
+    const gaugeProject = (await keeper.get(`/api/v1/repair-projects/${repairs[0].id}`)).body;
+    expect(gaugeProject.statusChanges.map((c: { toStatus: string }) => c.toStatus)).toEqual(['proposed', 'approved', 'fundraising', 'funded', 'underway', 'complete']);
+    expect(gaugeProject.findingOutcomes).toMatchObject([{ finding: { description: 'Two gauge glasses cracked.' }, treatedOn: expect.any(String), next: { findings: [] } }]);
+    const [treatment] = (await client.get(`/api/v1/repair-projects/${repairs[0].id}/treatments`)).body;
+    expect([treatment.beforePhotos.length, treatment.afterPhotos.length]).toEqual([1, 1]);
+    const shaft = (await client.get(`/api/v1/repair-projects/${repairs[1].id}`)).body;
+    expect(shaft).toMatchObject({ hotWork: true, findingCount: 1, workCautions: [{ kind: 'hotWork' }] });
 
     // `npm run seed` empties all of it (an amendment refers to the report it supersedes) and starts over.
     await clearData(ctx.dataSource);

@@ -26,10 +26,10 @@ async function renderFor(role: Role) {
 
 describe('AppNav', () => {
   it('shows an administrator every part that exists', async () => {
-    expect(await renderFor('admin')).toEqual(['Overview', 'Vessels', 'Ship map', 'Compartments', 'Collection', 'Condition', 'Incidents', 'Risk register', 'People', 'Audit trail', 'Outbox', 'Settings']);
+    expect(await renderFor('admin')).toEqual(['Overview', 'Vessels', 'Ship map', 'Compartments', 'Collection', 'Condition', 'Incidents', 'Risk register', 'Repair projects', 'People', 'Audit trail', 'Outbox', 'Settings']);
   });
 
   it.each(ROLES.filter((r) => r !== 'admin'))('hides the administration parts from %s', async (role) => {
-    expect(await renderFor(role)).toEqual(['Overview', 'Vessels', 'Ship map', 'Compartments', 'Collection', 'Condition', 'Incidents', 'Risk register']);
+    expect(await renderFor(role)).toEqual(['Overview', 'Vessels', 'Ship map', 'Compartments', 'Collection', 'Condition', 'Incidents', 'Risk register', 'Repair projects']);
   });
 });

@@ -6,11 +6,12 @@ import { loadConfig, type Config } from '../../server/config.js';
 import { openDatabase } from '../../server/db/data-source.js';
 import { Store } from '../../server/db/store.js';
 import { FakeMailServer } from '../../server/fakes/mail-server.js';
+import type { StripeClient } from '../../server/payments/stripe-client.js';
 
 export type TestApp = Awaited<ReturnType<typeof createTestApp>>;
 
 /** The real app on a fresh temporary database (migrations run), with its own fake mail server. */
-export async function createTestApp(overrides: Partial<Config> = {}, options: { dataDir?: string; mail?: boolean } = {}) {
+export async function createTestApp(overrides: Partial<Config> = {}, options: { dataDir?: string; mail?: boolean; stripe?: StripeClient } = {}) {
   const dataDir = options.dataDir ?? mkdtempSync(path.join(tmpdir(), 'shipkeeper-test-'));
   const config = loadConfig(
     { NODE_ENV: 'test' },
@@ -19,7 +20,7 @@ export async function createTestApp(overrides: Partial<Config> = {}, options: { 
   const dataSource = await openDatabase(config.databasePath);
   const fakeMail = new FakeMailServer();
   if (options.mail !== false) await fakeMail.start(0);
-  const shipkeeper = createApp({ config, dataSource, fakeMail });
+  const shipkeeper = createApp({ config, dataSource, fakeMail, stripe: options.stripe });
   await shipkeeper.files.ensure();
   return {
     ...shipkeeper,

@@ -55,6 +55,13 @@ const MATRIX: Record<string, Record<Role, boolean>> = {
   'risk.create': { admin: false, curator: false, conservator: true, docent: false, fundraiser: false },
   'risk.update': { admin: false, curator: false, conservator: true, docent: false, fundraiser: false },
   'risk.delete': { admin: false, curator: false, conservator: true, docent: false, fundraiser: false },
+  // Giving: fundraisers run appeals and gifts; donor e-mails, refunds and exports stay with them and the administrator.
+  'appeal.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
+  'appeal.update': { admin: true, curator: true, conservator: false, docent: false, fundraiser: true },
+  'donation.read': { admin: true, curator: true, conservator: false, docent: false, fundraiser: true },
+  'donation.readDonor': { admin: true, curator: false, conservator: false, docent: false, fundraiser: true },
+  'donation.refund': { admin: true, curator: false, conservator: false, docent: false, fundraiser: true },
+  'donation.export': { admin: true, curator: false, conservator: false, docent: false, fundraiser: true },
   'incident.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
   'incident.create': { admin: false, curator: true, conservator: true, docent: true, fundraiser: false },
   'incident.update': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
@@ -67,6 +74,14 @@ const MATRIX: Record<string, Record<Role, boolean>> = {
   'tour.approve': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
   'tour.return': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
   'tour.retire': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
+  // Repairs: curators and conservators plan them (approving is the curator's, in the service); fundraisers and all staff read.
+  'repairProject.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
+  'repairProject.create': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
+  'repairProject.update': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
+  'repairProject.changeStatus': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
+  'treatment.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
+  'treatment.create': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
+  'treatment.update': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
   // Files: curators and conservators, further limited to records their role may change (media.presenter.ts).
   'media.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
   'media.create': { admin: false, curator: true, conservator: true, docent: true, fundraiser: false },

@@ -1,3 +1,7 @@
+import { AppealMonthTotalEntity } from './appeal-month-total.entity.js';
+import { AppealEntity } from './appeal.entity.js';
+import { DonationEntity } from './donation.entity.js';
+import { StripeEventEntity } from './stripe-event.entity.js';
 import { ArtifactMoveEntity } from './artifact-move.entity.js';
 import { ArtifactEntity } from './artifact.entity.js';
 import { ConditionFindingEntity } from './condition-finding.entity.js';
@@ -15,6 +19,15 @@ import { InvitationEntity } from './invitation.entity.js';
 import { OrganisationSettingsEntity } from './organisation-settings.entity.js';
 import { PasswordResetEntity } from './password-reset.entity.js';
 import { PlanEntity } from './plan.entity.js';
+import { RepairProjectEntity } from './repair-project.entity.js';
+import { RepairProjectEstimateLineEntity } from './repair-project-estimate-line.entity.js';
+import { RepairProjectStatusChangeEntity } from './repair-project-status-change.entity.js';
+import { RepairProjectFindingEntity } from './repair-project-finding.entity.js';
+import { RepairProjectRiskEntity } from './repair-project-risk.entity.js';
+import { RepairProjectArtifactEntity } from './repair-project-artifact.entity.js';
+import { RepairProjectCompartmentEntity } from './repair-project-compartment.entity.js';
+import { TreatmentEntity } from './treatment.entity.js';
+import { TreatmentFindingEntity } from './treatment-finding.entity.js';
 import { SessionEntity } from './session.entity.js';
 import { UserEntity } from './user.entity.js';
 import { VesselEntity } from './vessel.entity.js';
@@ -24,6 +37,6 @@ import { TourRevisionEntity } from './tour-revision.entity.js';
 import { TourCommentEntity } from './tour-comment.entity.js';
 import { TourRouteSettingsEntity } from './tour-route-settings.entity.js';
 
-export { RiskEntity, RiskSubjectEntity, IncidentEntity, IncidentSubjectEntity, ConditionReportEntity, ConditionFindingEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, AuditEventEntity, CompartmentEntity, DeckEntity, HazardEntity, InvitationEntity, OrganisationSettingsEntity, PasswordResetEntity, PlanEntity, SessionEntity, UserEntity, VesselEntity, TourEntity, TourStopEntity, TourRevisionEntity, TourCommentEntity, TourRouteSettingsEntity };
+export { AppealEntity, AppealMonthTotalEntity, DonationEntity, StripeEventEntity, RepairProjectEntity, RepairProjectEstimateLineEntity, RepairProjectStatusChangeEntity, RepairProjectFindingEntity, RepairProjectRiskEntity, RepairProjectArtifactEntity, RepairProjectCompartmentEntity, TreatmentEntity, TreatmentFindingEntity, RiskEntity, RiskSubjectEntity, IncidentEntity, IncidentSubjectEntity, ConditionReportEntity, ConditionFindingEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, AuditEventEntity, CompartmentEntity, DeckEntity, HazardEntity, InvitationEntity, OrganisationSettingsEntity, PasswordResetEntity, PlanEntity, SessionEntity, UserEntity, VesselEntity, TourEntity, TourStopEntity, TourRevisionEntity, TourCommentEntity, TourRouteSettingsEntity };
 
-export const entities = [UserEntity, VesselEntity, OrganisationSettingsEntity, AuditEventEntity, SessionEntity, InvitationEntity, PasswordResetEntity, DeckEntity, CompartmentEntity, HazardEntity, PlanEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, ConditionReportEntity, ConditionFindingEntity, IncidentEntity, IncidentSubjectEntity, RiskEntity, RiskSubjectEntity, TourEntity, TourStopEntity, TourRevisionEntity, TourCommentEntity, TourRouteSettingsEntity];
+export const entities = [UserEntity, VesselEntity, OrganisationSettingsEntity, AuditEventEntity, SessionEntity, InvitationEntity, PasswordResetEntity, DeckEntity, CompartmentEntity, HazardEntity, PlanEntity, ArtifactEntity, ArtifactMoveEntity, MediaEntity, ConditionReportEntity, ConditionFindingEntity, IncidentEntity, IncidentSubjectEntity, RiskEntity, RiskSubjectEntity, RepairProjectEntity, RepairProjectEstimateLineEntity, RepairProjectStatusChangeEntity, RepairProjectFindingEntity, RepairProjectRiskEntity, RepairProjectArtifactEntity, RepairProjectCompartmentEntity, TreatmentEntity, TreatmentFindingEntity, AppealEntity, DonationEntity, StripeEventEntity, AppealMonthTotalEntity, TourEntity, TourStopEntity, TourRevisionEntity, TourCommentEntity, TourRouteSettingsEntity];

@@ -1,5 +1,6 @@
 import { Column, Entity, PrimaryColumn, UpdateDateColumn, VersionColumn } from 'typeorm';
 import { DEFAULT_RISK_SCALE, type RiskScale } from '../../../shared/calc/abc-risk.js';
+import { DEFAULT_GIVING_SETTINGS, type GivingSettings } from '../../../shared/schemas/giving-settings.js';
 import type { UnitSystem } from '../../../shared/schemas/settings.js';
 
 /** The organisation's settings: a single row with id 1. */
@@ -30,6 +31,10 @@ export class OrganisationSettingsEntity {
   /** Anchors of the ABC scales and floors of the priority bands (shared/calc/abc-risk.ts). */
   @Column({ type: 'simple-json', default: JSON.stringify(DEFAULT_RISK_SCALE) })
   riskScale: RiskScale;
+
+  /** Gift bounds and presets in cents, and what acknowledgments say (shared/schemas/giving-settings.ts). */
+  @Column({ type: 'simple-json', default: JSON.stringify(DEFAULT_GIVING_SETTINGS) })
+  giving: GivingSettings;
 
   @UpdateDateColumn({ type: 'datetime' })
   updatedAt: Date;

@@ -5,6 +5,8 @@ import { clearData, seedDemo } from './seed.js';
 import { seedDemoPlans } from './seed-plans.js';
 import { seedDemoCollection } from './seed-collection.js';
 import { seedDemoCondition } from './seed-condition.js';
+import { seedDemoRepairs } from './seed-repairs.js';
+import { seedDemoGiving } from './seed-giving.js';
 import { FileStore } from '../../storage/file-store.js';
 
 const config = loadConfig();
@@ -17,6 +19,9 @@ try {
   await seedDemoPlans(dataSource, config);
   await seedDemoCollection(dataSource, config);
   await seedDemoCondition(dataSource, config);
+  await seedDemoRepairs(dataSource, config);
+  // after the repair projects' demo: it appeals for the fundraising ones
+  await seedDemoGiving(dataSource);
   await dataSource.destroy();
   console.log(`Demo data written to ${config.databasePath}.`);
 } catch (err) {
