@@ -76,6 +76,24 @@ export function tourReviewRoutes(api: ApiRouter, review: TourReviewService, revi
 
   api.route({
     method: 'get',
+    path: '/tours/:id/placards.pdf',
+    tag,
+    summary: 'Printable QR placards of the published tour: one per page for every stop or one `stop`, or with `sheet=true` all stops on A4 sheets',
+    access: allowed('tour', 'read'),
+    params: idParam,
+    query: z.object({ stop: z.coerce.number().int().positive().optional(), sheet: z.enum(['true', 'false']).optional() }),
+    produces: 'application/pdf',
+    errors: [404, 422],
+    handler: async ({ params, query, res }) => {
+      const { pdf, fileName } = await review.placards(params.id, query.stop, query.sheet === 'true');
+      res.setHeader('Content-Type', 'application/pdf');
+      res.setHeader('Content-Disposition', `inline; filename="${fileName}"`);
+      res.end(pdf);
+    },
+  });
+
+  api.route({
+    method: 'get',
     path: '/tours/:id/comments',
     tag,
     summary: 'Review comments on the tour and its stops, oldest first',

@@ -9,6 +9,7 @@ import { recordAudit, type Actor } from './audit.service.js';
 import type { ClosureService } from './closure.service.js';
 import { assertPublishable, publishCheck } from './tour-checks.js';
 import { tourContext } from './tour-context.js';
+import { placardSheetPdf, placardsPdf } from './tour-placards-pdf.js';
 import { buildPublishedTour } from './tour-snapshot.js';
 import type { TourService } from './tour.service.js';
 
@@ -139,6 +140,17 @@ export class TourReviewService {
     const submitter = await this.store.repos.users.findById(tour.submittedById);
     if (!submitter || submitter.status !== 'active') return;
     await this.send({ to: [submitter], tourId: tour.id, subject, lines });
+  }
+
+  /** Placards from the published version (their codes lead to its public pages): one stop, every stop, or the sheet of all. */
+  async placards(id: number, stop: number | undefined, sheet: boolean) {
+    const tour = await this.store.repos.tours.findPlain(id);
+    if (!tour) throw new NotFoundError('The tour');
+    const published = tour.state !== 'retired' ? tour.publishedSnapshot : null;
+    if (!published) throw new UnprocessableError('Placards are printed from the published tour, whose pages their codes open: publish it first.');
+    if (stop !== undefined && !published.stops.some((s) => s.number === stop)) throw new NotFoundError(`Stop ${stop} of the published tour`);
+    const pdf = sheet ? await placardSheetPdf(published, this.config.publicUrl) : await placardsPdf(published, this.config.publicUrl, stop ?? null);
+    return { pdf, fileName: `${tour.slug}-${sheet ? 'all-stops' : stop ? `stop-${stop}` : 'placards'}.pdf` };
   }
 
   async comments(id: number) {

@@ -254,4 +254,32 @@ describe('tours', () => {
     expect(stale.status).toBe(409);
     expect(stale.body.error.message).toBe('The stops of this tour changed since you opened it. Reload to see them; the order is not saved.');
   });
+
+  it('prints QR placards of the published tour: one per stop and a sheet of all stops', async () => {
+    const { extractText, getDocumentProxy } = await import('unpdf');
+    const tour = await addStop((await newTour()).id, { textDoc: paragraph('Spare gauge glasses were kept here. They broke often.') });
+    await addStop(tour.id, { title: 'Second look', textDoc: paragraph('Lamp oil in cans.') });
+    const notYet = await docent.get(`/api/v1/tours/${tour.id}/placards.pdf`);
+    expect(notYet.status).toBe(422);
+    expect(notYet.body.error.message).toBe('Placards are printed from the published tour, whose pages their codes open: publish it first.');
+    const submitted = (await docent.post(`/api/v1/tours/${tour.id}/submit`, { version: tour.version })).body;
+    expect((await curator.post(`/api/v1/tours/${tour.id}/approve`, { version: submitted.version })).status).toBe(200);
+
+    const one = await docent.getBytes(`/api/v1/tours/${tour.id}/placards.pdf?stop=1`);
+    expect(one.status).toBe(200);
+    expect(one.headers['content-type']).toBe('application/pdf');
+    const onePdf = await getDocumentProxy(new Uint8Array(one.body as Buffer));
+    expect(onePdf.numPages).toBe(1);
+    const oneText = (await extractText(onePdf, { mergePages: true })).text;
+    expect(oneText).toContain('The store room');
+    expect(oneText).toContain('Spare gauge glasses were kept here.');
+    expect(oneText).not.toContain('They broke often.');
+    expect(oneText).toContain(`${ctx.config.publicUrl}/visit/tours/below-the-waterline/stops/1`);
+
+    const sheet = await docent.getBytes(`/api/v1/tours/${tour.id}/placards.pdf?sheet=true`);
+    const sheetText = (await extractText(await getDocumentProxy(new Uint8Array(sheet.body as Buffer)), { mergePages: true })).text;
+    expect(sheetText).toContain('Second look');
+    expect(sheetText).toContain('Lamp oil in cans.');
+    expect((await docent.get(`/api/v1/tours/${tour.id}/placards.pdf?stop=9`)).status).toBe(404);
+  });
 });
