@@ -1,3 +1,4 @@
+import { stopPosition } from '../../shared/calc/tour-route.js';
 import { can } from '../../shared/permissions.js';
 import { cautionsFor } from '../../shared/schemas/hazard-cautions.js';
 import type { RichTextDoc } from '../../shared/schemas/rich-text.js';
@@ -63,6 +64,7 @@ export function presentStop(tour: TourEntity, stop: TourStopEntity, ctx: TourCon
     virtual: stop.virtual,
     effectivelyVirtual: effectivelyVirtual(tour, stop, c, ctx.closedNow),
     point: stop.point,
+    standsAt: stopPosition(stop.point, c?.outline ?? null),
     visitorCautions: visitorCautions(kinds),
     hazardCautions: cautionsFor(kinds),
     version: stop.version,

@@ -63,6 +63,8 @@ export const tourStop = z
     /** Shown as virtual: marked so, or in a space closed to visitors (sealed, staff only or closed now). */
     effectivelyVirtual: z.boolean(),
     point: point.nullable(),
+    /** Where the route puts the stop: its point, else its space's centre; null when neither is drawn. */
+    standsAt: point.nullable(),
     /** Cautions of the space's hazards for visitors, and the staff's own. */
     visitorCautions: z.array(z.object({ kind: z.string(), text: z.string() })),
     hazardCautions,
