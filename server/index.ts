@@ -7,6 +7,7 @@ import { seedDemoCollection } from './db/seed/seed-collection.js';
 import { seedDemoCondition } from './db/seed/seed-condition.js';
 import { seedDemoRepairs } from './db/seed/seed-repairs.js';
 import { seedDemoGiving } from './db/seed/seed-giving.js';
+import { seedDemoTours } from './db/seed/seed-tours.js';
 import { DEMO_PASSWORD, DEMO_USERS } from './db/seed/demo-data.js';
 import { FakeMailServer } from './fakes/mail-server.js';
 import { FakeStripeServer } from './fakes/stripe/server.js';
@@ -43,6 +44,7 @@ if (config.seedOnStart && (await seedDemo(dataSource, { bcryptCost: config.bcryp
   await seedDemoRepairs(dataSource, config);
   // after the repair projects' demo: it appeals for the fundraising ones
   await seedDemoGiving(dataSource);
+  await seedDemoTours(dataSource, config);
   console.log(`Demo data seeded. Sign in as ${DEMO_USERS.map((u) => u.email).join(', ')} with the password "${DEMO_PASSWORD}".`);
 }
 

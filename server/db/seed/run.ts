@@ -7,6 +7,7 @@ import { seedDemoCollection } from './seed-collection.js';
 import { seedDemoCondition } from './seed-condition.js';
 import { seedDemoRepairs } from './seed-repairs.js';
 import { seedDemoGiving } from './seed-giving.js';
+import { seedDemoTours } from './seed-tours.js';
 import { FileStore } from '../../storage/file-store.js';
 
 const config = loadConfig();
@@ -22,6 +23,7 @@ try {
   await seedDemoRepairs(dataSource, config);
   // after the repair projects' demo: it appeals for the fundraising ones
   await seedDemoGiving(dataSource);
+  await seedDemoTours(dataSource, config);
   await dataSource.destroy();
   console.log(`Demo data written to ${config.databasePath}.`);
 } catch (err) {
