@@ -68,7 +68,10 @@ export function publicRoutes(api: ApiRouter, deps: { health: HealthService; vess
     params: slugParam,
     response: publicTour,
     errors: [404],
-    handler: ({ params }) => deps.tours.get(params.slug),
+    handler: async ({ params, res }) => {
+      // Serialized once per publication and closure state (TourPublicService).
+      res.type('application/json').send(await deps.tours.get(params.slug));
+    },
   });
 
   api.route({

@@ -34,6 +34,17 @@ export class TourRepository {
     return this.repo.findOne({ where: { slug, publishedSnapshot: Not(IsNull()), state: Not('retired') } });
   }
 
+  /** Which published tour has this slug and when it was published, without reading its snapshot. */
+  publishedHead(slug: string): Promise<{ id: number; publishedAt: Date } | null> {
+    return this.repo
+      .createQueryBuilder('t')
+      .select(['t.id', 't.publishedAt'])
+      .where('t.slug = :slug', { slug })
+      .andWhere('t.publishedSnapshot IS NOT NULL')
+      .andWhere("t.state != 'retired'")
+      .getOne() as Promise<{ id: number; publishedAt: Date } | null>;
+  }
+
   /** Published tours of another vessel with this slug. */
   publishedElsewhere(slug: string, tourId: number) {
     return this.repo.createQueryBuilder('t').where('t.slug = :slug', { slug }).andWhere('t.id != :tourId', { tourId }).andWhere('t.publishedSnapshot IS NOT NULL').andWhere("t.state != 'retired'").getCount();
