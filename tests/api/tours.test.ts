@@ -282,4 +282,26 @@ describe('tours', () => {
     expect(sheetText).toContain('Lamp oil in cans.');
     expect((await docent.get(`/api/v1/tours/${tour.id}/placards.pdf?stop=9`)).status).toBe(404);
   });
+
+  it('keeps a stop’s audio for the staff, refuses audio through the general upload, and strips unsafe links from the text', async () => {
+    const tour = await newTour();
+    const audio = await docent.agent.post(`/api/v1/tours/${tour.id}/audio`).set('x-csrf-token', docent.csrf).attach('file', tinyMp3(), 'welcome.mp3');
+    expect(audio.status).toBe(201);
+    const fundraiser = (await signedInAs(ctx.app, ctx.store, 'fundraiser')).client;
+    const clip = await fundraiser.getBytes(`/api/v1/media/${audio.body.id}/original`);
+    expect(clip.status).toBe(200);
+    expect(clip.headers['content-type']).toBe('audio/mpeg');
+    expect((await new Client(ctx.app).get(`/api/v1/media/${audio.body.id}/original`)).status).toBe(401);
+    const viaGeneral = await docent.agent.post(`/api/v1/media?ownerType=tour&ownerId=${tour.id}`).set('x-csrf-token', docent.csrf).attach('file', tinyMp3(), 'welcome.mp3');
+    expect(viaGeneral.status).toBe(415);
+
+    const link = (href: string) => ({ type: 'text', text: 'here', marks: [{ type: 'link', attrs: { href } }] });
+    const withLinks = await addStop(tour.id, { textDoc: { type: 'doc', content: [{ type: 'paragraph', content: [link('javascript:alert(1)'), { type: 'text', text: ' and ' }, link('https://example.test/engines')] }] } });
+    const html = withLinks.stops[0].textHtml as string;
+    expect(html).not.toContain('javascript:');
+    expect(html).toBe('<p><a rel="noopener noreferrer nofollow">here</a> and <a rel="noopener noreferrer nofollow" href="https://example.test/engines">here</a></p>');
+    const script = await docent.post(`/api/v1/tours/${tour.id}/stops`, { compartmentId: place.first, title: 'Sneaky', textDoc: { type: 'doc', content: [{ type: 'codeBlock', content: [{ type: 'text', text: '<script>alert(1)</script>' }] }] } });
+    expect(script.status).toBe(422);
+    expect(script.body.error.code).toBe('invalid_rich_text');
+  });
 });
