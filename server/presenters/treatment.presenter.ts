@@ -8,7 +8,7 @@ export function performerLabel(t: Pick<TreatmentEntity, 'performedBy' | 'contrac
   return t.performedBy ? t.performedBy.name : t.contractorName || 'Not recorded';
 }
 
-export function presentTreatment(t: TreatmentEntity, findings: { id: number; label: string }[], photos: { before: Media[]; after: Media[] }, viewer: Express.User): Treatment {
+export function presentTreatment(t: TreatmentEntity, findings: { id: number; label: string }[], findingCount: number, photos: { before: Media[]; after: Media[] }, viewer: Express.User): Treatment {
   return {
     id: t.id,
     vesselId: t.vesselId,
@@ -20,6 +20,7 @@ export function presentTreatment(t: TreatmentEntity, findings: { id: number; lab
     method: t.method,
     materials: t.materials,
     findings,
+    findingCount,
     beforePhotos: photos.before,
     afterPhotos: photos.after,
     createdAt: t.createdAt.toISOString(),

@@ -1,4 +1,4 @@
-import { canReadMediaOf } from '../../shared/permissions.js';
+import { can, canReadMediaOf } from '../../shared/permissions.js';
 import type { z } from 'zod';
 import type { createTreatmentBody, UpdateTreatmentBody } from '../../shared/schemas/treatments.js';
 import type { TreatmentEntity } from '../db/entities/treatment.entity.js';
@@ -38,8 +38,10 @@ export class TreatmentService {
       canReadMediaOf(viewer.role, ownerType) ? (await repos.media.forOwner(ownerType, id)).map((m) => presentMedia(m, viewer)) : [];
     const out = [];
     for (const t of treatments) {
-      const findings = (findingIds.get(t.id) ?? []).map((id) => ({ id, label: labels.get(id)?.label ?? `Finding ${id}` }));
-      out.push(presentTreatment(t, findings, { before: await photos('treatment-before', t.id), after: await photos('treatment-after', t.id) }, viewer));
+      const ids = findingIds.get(t.id) ?? [];
+      // What a finding says is for the roles that read findings; the others learn how many there are.
+      const findings = can(viewer.role, 'conditionReport', 'readFindings') ? ids.map((id) => ({ id, label: labels.get(id)?.label ?? `Finding ${id}` })) : [];
+      out.push(presentTreatment(t, findings, ids.length, { before: await photos('treatment-before', t.id), after: await photos('treatment-after', t.id) }, viewer));
     }
     return out;
   }

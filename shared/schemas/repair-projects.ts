@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { hazardCautions } from './hazard-cautions.js';
 import { listQuery, pageOf } from './common.js';
-import { richTextDoc } from './rich-text.js';
+import { EMPTY_DOC, richTextDoc } from './rich-text.js';
 import { freeText, line, refuseInvalidCharacters, text } from './text.js';
 
 export const REPAIR_PROJECT_STATUSES = ['proposed', 'approved', 'fundraising', 'funded', 'underway', 'complete', 'cancelled'] as const;
@@ -206,6 +206,7 @@ const projectFields = {
 export const createRepairProjectBody = z
   .object({
     ...projectFields,
+    scope: projectFields.scope.default(EMPTY_DOC),
     lines: projectFields.lines.default([]),
     contingencyBasisPoints: projectFields.contingencyBasisPoints.default(1000),
     contractorNotes: projectFields.contractorNotes.default(''),

@@ -14,7 +14,9 @@ export const treatment = z
     performerLabel: z.string(),
     method: z.string(),
     materials: z.string(),
+    /** Empty for a role that does not read condition findings; `findingCount` says how many. */
     findings: z.array(z.object({ id: z.number().int(), label: z.string() })),
+    findingCount: z.number().int(),
     /** Empty for a role that may not see the photos of treatments. */
     beforePhotos: z.array(media),
     afterPhotos: z.array(media),

@@ -1,6 +1,7 @@
 import { ref } from 'vue';
 import type { z } from 'zod';
 import { ApiRequestError } from '@/api/client';
+import { readableMessage } from '@shared/schemas/issue-message';
 
 /**
  * Form errors in one place: checks a body with the same zod schema the server uses, and takes
@@ -19,7 +20,7 @@ export function useFieldErrors() {
     clear();
     const result = schema.safeParse(value);
     if (result.success) return result.data;
-    for (const issue of result.error.issues) fields.value[issue.path.join('.') || '_'] ??= issue.message;
+    for (const issue of result.error.issues) fields.value[issue.path.join('.') || '_'] ??= readableMessage(issue.message, issue.path);
     message.value = 'Some fields need attention.';
     return null;
   }

@@ -14,12 +14,14 @@ declare module 'vue-router' {
     /** The permission the screen needs; the navigation hides what the user may not use. */
     permission?: ScreenPermission;
     title?: string;
+    /** The screen keeps its state in the query (the ship map): a change of the query alone leaves the page where it is scrolled. */
+    queryState?: boolean;
   }
 }
 
 export const router = createRouter({
   history: createWebHistory(),
-  scrollBehavior: () => ({ top: 0 }),
+  scrollBehavior: (to, from) => (to.meta.queryState && to.name === from.name ? false : { top: 0 }),
   routes: [
     { path: '/', redirect: { name: 'visit-home' } },
     { path: '/sign-in', name: 'sign-in', component: SignInView, meta: { title: 'Sign in' } },
@@ -44,7 +46,7 @@ export const router = createRouter({
       children: [
         { path: '', name: 'staff-home', component: () => import('@/views/staff/OverviewView.vue'), meta: { title: 'Overview' } },
         { path: 'vessels', name: 'vessels', component: () => import('@/views/staff/VesselsView.vue'), meta: { title: 'Vessels', permission: { resource: 'vessel', action: 'read' } } },
-        { path: 'ship', name: 'ship-map', component: () => import('@/views/staff/ShipMapView.vue'), meta: { title: 'Ship map', permission: { resource: 'deck', action: 'read' } } },
+        { path: 'ship', name: 'ship-map', component: () => import('@/views/staff/ShipMapView.vue'), meta: { title: 'Ship map', permission: { resource: 'deck', action: 'read' }, queryState: true } },
         { path: 'compartments', name: 'compartments', component: () => import('@/views/staff/CompartmentsView.vue'), meta: { title: 'Compartments', permission: { resource: 'compartment', action: 'read' } } },
         { path: 'compartments/:id', name: 'compartment', component: () => import('@/views/staff/CompartmentView.vue'), meta: { title: 'Compartment', permission: { resource: 'compartment', action: 'read' } } },
         { path: 'collection', name: 'artifacts', component: () => import('@/views/staff/ArtifactsView.vue'), meta: { title: 'Collection', permission: { resource: 'artifact', action: 'read' } } },

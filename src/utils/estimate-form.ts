@@ -17,6 +17,9 @@ export function rowsOf(lines: EstimateLine[]): EstimateRow[] {
   return lines.map((l) => ({ key: nextKey++, description: l.description, quantity: formatDecimal(l.quantityMilli, 3).replace(/,/g, ''), unit: l.unit, unitCost: formatDecimal(l.unitCostCents, 2, 2).replace(/,/g, '') }));
 }
 
+/** The rows without those left wholly blank (as a new form starts): dropped before saving, so errors name the lines sent. */
+export const withoutBlankRows = (rows: EstimateRow[]) => rows.filter((r) => r.description.trim() || r.unit.trim() || r.unitCost.trim());
+
 export const percentOf = (basisPoints: number) => formatDecimal(basisPoints, 2);
 
 export interface ReadEstimate {

@@ -205,7 +205,7 @@ describe('treatments', () => {
     }
     expect((await fundraiser.agent.post(`/api/v1/media?ownerType=treatment-after&ownerId=${treatment.body.id}`).set('x-csrf-token', fundraiser.csrf).attach('file', await cameraJpeg(), 'x.jpg')).status).toBe(403);
     const listed = (await fundraiser.get(`/api/v1/repair-projects/${project.id}/treatments`)).body;
-    expect(listed).toMatchObject([{ beforePhotos: [{ fileName: 'before.jpg' }], afterPhotos: [{ fileName: 'after.jpg' }], abilities: { update: false, addPhotos: false } }]);
+    expect(listed).toMatchObject([{ beforePhotos: [{ fileName: 'before.jpg' }], afterPhotos: [{ fileName: 'after.jpg' }], findings: [], findingCount: 1, abilities: { update: false, addPhotos: false } }]);
 
     const stale = await curator.patch(`/api/v1/treatments/${treatment.body.id}`, { materials: 'x', version: treatment.body.version + 1 });
     expect(stale.status).toBe(409);

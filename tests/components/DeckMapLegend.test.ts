@@ -1,9 +1,28 @@
 // @vitest-environment happy-dom
-import { bandRange, PRIORITY_BANDS, PRIORITY_LABELS } from '@shared/calc/abc-risk';
+import { bandRange, DEFAULT_RISK_SCALE, PRIORITY_BANDS, PRIORITY_LABELS, type RiskScale } from '@shared/calc/abc-risk';
 import { GRADE_LABELS, GRADES } from '@shared/calc/condition-grade';
-import { mount } from '@vue/test-utils';
-import { describe, expect, it } from 'vitest';
+import { PiniaColada } from '@pinia/colada';
+import { flushPromises, mount as mountWith } from '@vue/test-utils';
+import { createPinia } from 'pinia';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import DeckMapLegend from '@/components/DeckMapLegend.vue';
+
+/** The organisation's risk scale the settings answer with. */
+let riskScale: RiskScale = DEFAULT_RISK_SCALE;
+beforeEach(() => {
+  riskScale = DEFAULT_RISK_SCALE;
+  vi.stubGlobal(
+    'fetch',
+    vi.fn((input: string | URL | Request) =>
+      String(input).endsWith('/settings')
+        ? Promise.resolve(new Response(JSON.stringify({ unitSystem: 'metric', riskScale }), { status: 200, headers: { 'content-type': 'application/json' } }))
+        : Promise.reject(new Error(`unexpected request ${String(input)}`)),
+    ),
+  );
+});
+afterEach(() => vi.unstubAllGlobals());
+
+const mount = (component: typeof DeckMapLegend, options: { props: Record<string, unknown> }) => mountWith(component, { ...options, global: { plugins: [createPinia(), PiniaColada] } });
 
 function keyItems(wrapper: ReturnType<typeof mount>) {
   return wrapper.findAll('li[data-fill]');
@@ -48,6 +67,20 @@ describe('DeckMapLegend', () => {
     expect(new Set(items.map((li) => li.find('svg').attributes('data-hatch'))).size).toBe(items.length);
     expect(wrapper.text()).toContain('counts the open risks');
     expect(wrapper.text()).toContain('Centerline');
+  });
+
+  it('gives the bands the ranges of the organisation’s risk scale once the settings are in', async () => {
+    riskScale = { ...DEFAULT_RISK_SCALE, bandFloors: { low: 4, medium: 8, high: 10, 'very-high': 12, extreme: 14 } };
+    const wrapper = mount(DeckMapLegend, { props: { overlay: 'risks' } });
+    await flushPromises();
+    const items = keyItems(wrapper);
+    expect(items[0]!.text()).toContain('MR 14–15');
+    expect(items[1]!.text()).toContain('MR 12–13.5');
+    expect(items[2]!.text()).toContain('MR 10–11.5');
+    expect(items[3]!.text()).toContain('MR 8–9.5');
+    expect(items[4]!.text()).toContain('MR 4–7.5');
+    PRIORITY_BANDS.forEach((band, i) => expect(items[i]!.text()).toContain(bandRange(band, riskScale)));
+    expect(items[4]!.text()).not.toContain(bandRange('low'));
   });
 
   it('keeps the access key, by border pattern, when the outlines show access', () => {

@@ -2,6 +2,7 @@
 import { mount } from '@vue/test-utils';
 import { describe, expect, it } from 'vitest';
 import DeckMapList from '@/components/DeckMapList.vue';
+import type { DeckConditionEntry } from '@/components/DeckMapFills.vue';
 import { compartmentFixture } from './render';
 
 const compartments = [
@@ -52,5 +53,45 @@ describe('DeckMapList', () => {
     await wrapper.setProps({ compartments: [] });
     expect(wrapper.findAll('button')).toHaveLength(0);
     expect(wrapper.text()).toContain('No compartments drawn on this deck yet.');
+  });
+
+  it('shows each compartment’s grade in the condition overlay and its open risks in the risk overlay', async () => {
+    const entry = (compartmentId: number, rest: Partial<DeckConditionEntry>): DeckConditionEntry => ({
+      compartmentId,
+      grade: null,
+      reportId: null,
+      inspectedOn: null,
+      openRisks: 0,
+      maxMagnitude: null,
+      band: null,
+      ...rest,
+    });
+    const conditions = new Map([
+      [11, entry(11, { grade: 'poor', reportId: 4, inspectedOn: '2026-08-06', openRisks: 2, maxMagnitude: 11, band: 'high' })],
+      [12, entry(12, { grade: 'good', reportId: 5, inspectedOn: '2026-02-07', openRisks: 1, maxMagnitude: 7, band: 'low' })],
+      [13, entry(13, {})],
+    ]);
+    const wrapper = mount(DeckMapList, { props: { compartments, selectedId: null, overlay: 'condition', conditions } });
+    expect(buttonFor(wrapper, 'Forward berthing').find('[data-testid="list-grade"]').text()).toBe('Poor');
+    expect(buttonFor(wrapper, 'Galley').find('[data-testid="list-grade"]').text()).toBe('Good');
+    expect(buttonFor(wrapper, 'Mess deck').find('[data-testid="list-grade"]').text()).toBe('Not surveyed');
+    // The swatch is the outline's fill, hatching and all, not the access border.
+    expect(buttonFor(wrapper, 'Forward berthing').find('svg').attributes('data-hatch')).toBe('close');
+    expect(buttonFor(wrapper, 'Forward berthing').find('.deck-map-list__swatch').exists()).toBe(false);
+    expect(buttonFor(wrapper, 'Galley').text()).toContain('Staff only');
+
+    await wrapper.setProps({ overlay: 'risks' });
+    expect(buttonFor(wrapper, 'Forward berthing').find('[data-testid="list-risks"]').text()).toBe('2 open risks, high priority');
+    expect(buttonFor(wrapper, 'Galley').find('[data-testid="list-risks"]').text()).toBe('1 open risk, low priority');
+    expect(buttonFor(wrapper, 'Mess deck').find('[data-testid="list-risks"]').text()).toBe('No open risks');
+    expect(wrapper.find('[data-testid="list-grade"]').exists()).toBe(false);
+
+    // In the access overlay, or while the overlay's data loads, the list shows access only.
+    await wrapper.setProps({ overlay: 'access' });
+    expect(wrapper.find('[data-testid="list-risks"]').exists()).toBe(false);
+    expect(wrapper.findAll('.deck-map-list__swatch')).toHaveLength(3);
+    await wrapper.setProps({ overlay: 'condition', conditions: new Map() });
+    expect(wrapper.find('[data-testid="list-grade"]').exists()).toBe(false);
+    expect(wrapper.findAll('.deck-map-list__swatch')).toHaveLength(3);
   });
 });
