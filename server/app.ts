@@ -35,6 +35,12 @@ import { planRoutes } from './routes/plans.routes.js';
 import { interpretationRoutes } from './routes/interpretations.routes.js';
 import { invitationRoutes } from './routes/invitations.routes.js';
 import { publicRoutes } from './routes/public.routes.js';
+import { tourReviewRoutes } from './routes/tour-review.routes.js';
+import { tourRoutes } from './routes/tours.routes.js';
+import { TourPublicService } from './services/tour-public.service.js';
+import { TourReviewService } from './services/tour-review.service.js';
+import { TourRevisionService } from './services/tour-revisions.service.js';
+import { TourService } from './services/tour.service.js';
 import { donationRoutes } from './routes/donations.routes.js';
 import { givingPublicRoutes } from './routes/giving.routes.js';
 import { AppealService } from './services/appeal.service.js';
@@ -143,7 +149,11 @@ export function createApp({ config, dataSource, fakeMail, stripe = createStripeC
   riskRoutes(api, new RiskService(store));
   repairProjectRoutes(api, new RepairProjectService(store), new TreatmentService(store));
   interpretationRoutes(api, new InterpretationService(store, mailer, config));
-  mediaRoutes(api, new MediaService(store, files), { incomingDir: files.incoming, maxBytes: config.mediaMaxBytes });
+  const media = new MediaService(store, files);
+  mediaRoutes(api, media, { incomingDir: files.incoming, maxBytes: config.mediaMaxBytes });
+  const tours = new TourService(store, closures);
+  tourRoutes(api, tours, media, { incomingDir: files.incoming, maxBytes: config.mediaMaxBytes });
+  tourReviewRoutes(api, new TourReviewService(store, tours, closures, mailer, config), new TourRevisionService(store, tours));
   calcRoutes(api);
   adminRoutes(api, { audit: new AuditService(store), settings, outbox: new OutboxService(fakeMail) });
   const webhooks = new StripeWebhookService(store, stripe, new GivingReceipts(store, mailer));
@@ -158,6 +168,7 @@ export function createApp({ config, dataSource, fakeMail, stripe = createStripeC
     vessels,
     settings,
     closures,
+    tours: new TourPublicService(store, media),
     openApi: () => (openApi ??= buildOpenApiDocument(api.routes, version)),
   });
 

@@ -8,6 +8,7 @@ import { seedDemoCondition } from './db/seed/seed-condition.js';
 import { seedDemoRepairs } from './db/seed/seed-repairs.js';
 import { seedDemoGiving } from './db/seed/seed-giving.js';
 import { seedDemoInterpretation } from './db/seed/seed-interpretation.js';
+import { seedDemoTours } from './db/seed/seed-tours.js';
 import { DEMO_PASSWORD, DEMO_USERS } from './db/seed/demo-data.js';
 import { FakeMailServer } from './fakes/mail-server.js';
 import { FakeStripeServer } from './fakes/stripe/server.js';
@@ -45,6 +46,7 @@ if (config.seedOnStart && (await seedDemo(dataSource, { bcryptCost: config.bcryp
   // after the repair projects' demo: it appeals for the fundraising ones
   await seedDemoGiving(dataSource);
   await seedDemoInterpretation(dataSource, config);
+  await seedDemoTours(dataSource, config);
   console.log(`Demo data seeded. Sign in as ${DEMO_USERS.map((u) => u.email).join(', ')} with the password "${DEMO_PASSWORD}".`);
 }
 

@@ -30,6 +30,8 @@ export const PERMISSIONS = {
   risk: { read: STAFF, create: CONSERVATOR, update: CONSERVATOR, delete: CONSERVATOR },
   /** Docents find damage on tours and log it; a conservator or curator completes the record. */
   incident: { read: STAFF, create: ['conservator', 'curator', 'docent'], update: ['conservator', 'curator'] },
+  /** Docents write tours and submit them; curators publish (their own work too). */
+  tour: { read: STAFF, create: ['docent', 'curator'], update: ['docent', 'curator'], submit: ['docent', 'curator'], comment: ['docent', 'curator'], approve: CURATOR, return: CURATOR, retire: CURATOR },
   /** Approving is the curator's alone: the service refuses a conservator's approval (changeStatus covers the other steps). */
   repairProject: { read: STAFF, create: ['curator', 'conservator'], update: ['curator', 'conservator'], changeStatus: ['curator', 'conservator'] },
   treatment: { read: STAFF, create: ['conservator', 'curator'], update: ['conservator', 'curator'] },
@@ -68,6 +70,8 @@ export const MEDIA_OWNERS = {
   /** Whoever may log an incident may add its photos (attach); changing them takes update. */
   incident: { resource: 'incident', read: 'read', attach: 'create' },
   'condition-report': { resource: 'conditionReport', read: 'readFindings' },
+  /** A tour's cover photo and its stops' audio. */
+  tour: { resource: 'tour', read: 'read' },
   'treatment-before': { resource: 'treatment', read: 'read' },
   'treatment-after': { resource: 'treatment', read: 'read' },
 } as const satisfies Record<MediaOwnerType, { resource: Resource; read: string; attach?: string }>;

@@ -20,6 +20,10 @@ import { PlanRepository } from './repositories/plan.repository.js';
 import { SettingsRepository } from './repositories/settings.repository.js';
 import { UserRepository } from './repositories/user.repository.js';
 import { VesselRepository } from './repositories/vessel.repository.js';
+import { TourRepository } from './repositories/tour.repository.js';
+import { TourStopRepository } from './repositories/tour-stop.repository.js';
+import { TourRevisionRepository } from './repositories/tour-revision.repository.js';
+import { TourRouteSettingsRepository } from './repositories/tour-route-settings.repository.js';
 import { SearchIndex } from '../search/search-index.js';
 import { writeLock } from './write-lock.js';
 
@@ -41,6 +45,10 @@ export interface Repositories {
   conditionReports: ConditionReportRepository;
   incidents: IncidentRepository;
   risks: RiskRepository;
+  tours: TourRepository;
+  tourStops: TourStopRepository;
+  tourRevisions: TourRevisionRepository;
+  tourRouteSettings: TourRouteSettingsRepository;
   repairProjects: RepairProjectRepository;
   treatments: TreatmentRepository;
   appeals: AppealRepository;
@@ -67,6 +75,10 @@ function repositories(manager: EntityManager): Repositories {
     conditionReports: new ConditionReportRepository(manager),
     incidents: new IncidentRepository(manager),
     risks: new RiskRepository(manager),
+    tours: new TourRepository(manager),
+    tourStops: new TourStopRepository(manager),
+    tourRevisions: new TourRevisionRepository(manager),
+    tourRouteSettings: new TourRouteSettingsRepository(manager),
     repairProjects: new RepairProjectRepository(manager),
     treatments: new TreatmentRepository(manager),
     appeals: new AppealRepository(manager),

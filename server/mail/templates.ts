@@ -6,7 +6,7 @@ function escapeHtml(value: string): string {
   return value.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
 }
 
-function layout(title: string, paragraphs: string[], action: { label: string; url: string }, footer: string): string {
+export function layout(title: string, paragraphs: string[], action: { label: string; url: string }, footer: string): string {
   const body = paragraphs.map((p) => `<p style="margin:0 0 16px">${escapeHtml(p)}</p>`).join('');
   return `<!doctype html><html><body style="margin:0;background:#f3f1ec;font-family:Georgia,serif;color:#1d2a36">
 <div style="max-width:560px;margin:24px auto;background:#fff;border-top:6px solid #1f4e5f;padding:28px 32px">

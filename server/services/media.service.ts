@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { unlink } from 'node:fs/promises';
 import path from 'node:path';
 import { fileTypeFromFile } from 'file-type';
-import { DOCUMENT_FORMATS, MEDIA_FORMATS, PHOTO_FORMATS, type MediaOwnerQuery, type MediaOwnerType, type UpdateMediaBody } from '../../shared/schemas/media.js';
+import { AUDIO_FORMATS, DOCUMENT_FORMATS, PHOTO_FORMATS, UPLOAD_FORMATS, type MediaOwnerQuery, type MediaOwnerType, type UpdateMediaBody } from '../../shared/schemas/media.js';
 import type { MediaEntity } from '../db/entities/media.entity.js';
 import type { Repositories, Store } from '../db/store.js';
 import { ApiError, ConflictError, ForbiddenError, NotFoundError, ValidationError } from '../http/errors.js';
@@ -15,8 +15,15 @@ import { assertMayReadMediaOf } from './media-access.js';
 import { derivativeFile, makeDerivatives, type PhotoFacts } from './media-derivatives.js';
 import type { UploadedFile } from './plan.service.js';
 
-const EXTENSIONS: Record<string, string> = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp', 'application/pdf': 'pdf' };
-const OWNER_LABELS: Record<MediaOwnerType, string> = { artifact: 'an artifact', compartment: 'a compartment', 'condition-report': 'a condition report', incident: 'an incident', 'treatment-before': 'a treatment', 'treatment-after': 'a treatment' };
+const EXTENSIONS: Record<string, string> = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp', 'application/pdf': 'pdf', 'audio/mpeg': 'mp3', 'audio/x-m4a': 'm4a', 'audio/ogg': 'ogg', 'audio/ogg; codecs=opus': 'opus' };
+const OWNER_LABELS: Record<MediaOwnerType, string> = { artifact: 'an artifact', compartment: 'a compartment', 'condition-report': 'a condition report', incident: 'an incident', 'treatment-before': 'a treatment', 'treatment-after': 'a treatment', tour: 'a tour' };
+
+/** What an upload may be: a photo or a PDF on any record, or an audio clip on a tour. */
+export type UploadAccepts = 'photo-or-document' | 'audio';
+const REFUSED: Record<UploadAccepts, { message: string; field: string }> = {
+  'photo-or-document': { message: 'This file is not a JPEG, PNG, WebP or PDF file, whatever its name says.', field: 'Not a JPEG, PNG, WebP or PDF file.' },
+  audio: { message: 'This file is not an MP3, M4A or Ogg audio file, whatever its name says.', field: 'Not an MP3, M4A or Ogg audio file.' },
+};
 
 interface Owner {
   vesselId: number;
@@ -24,6 +31,8 @@ interface Owner {
   /** A submitted report's photos no longer change. */
   locked?: boolean;
 }
+
+const KIND_LABELS = { photo: 'Photo', document: 'Document', audio: 'Audio clip' } as const;
 
 function safeFileName(name: string): string {
   const base = path.basename(name).replace(/[\u0000-\u001f\u007f"\\/]/g, '_').trim();
@@ -52,6 +61,11 @@ export class MediaService {
       const report = await repos.conditionReports.findById(ownerId);
       if (!report) throw new NotFoundError('The condition report');
       return { vesselId: report.vesselId, label: `condition report ${report.id}`, locked: report.status !== 'draft' };
+    }
+    if (ownerType === 'tour') {
+      const tour = await repos.tours.findPlain(ownerId);
+      if (!tour) throw new NotFoundError('The tour');
+      return { vesselId: tour.vesselId, label: `tour ${tour.title}` };
     }
     if (ownerType === 'treatment-before' || ownerType === 'treatment-after') {
       const treatment = await repos.treatments.findById(ownerId);
@@ -94,9 +108,24 @@ export class MediaService {
     return { path: derivativeFile(this.files.path(media.storageKey), variant), type: 'image/webp', name: `${path.parse(media.fileName).name}-${variant}.webp` };
   }
 
+  /**
+   * A file that a published record shows the public (a published tour lists its files; the caller
+   * has checked that it does): a photo's WebP derivative, never an original, or an audio clip.
+   */
+  async publicFile(id: number, variant: 'thumb' | 'display' | 'audio') {
+    const media = await this.store.repos.media.findById(id);
+    if (!media) throw new NotFoundError('The file');
+    if (variant === 'audio') {
+      if (media.kind !== 'audio') throw new NotFoundError('The audio clip');
+      return { path: this.files.path(path.join(media.storageKey, `original.${EXTENSIONS[media.mimeType]}`)), type: media.mimeType.split(';')[0]!, name: media.fileName };
+    }
+    if (media.kind !== 'photo') throw new NotFoundError('A preview of this file');
+    return { path: derivativeFile(this.files.path(media.storageKey), variant), type: 'image/webp', name: `${path.parse(media.fileName).name}-${variant}.webp` };
+  }
+
   /** Checks and keeps one uploaded file; the temporary file is always consumed. */
-  async upload(query: MediaOwnerQuery, file: UploadedFile | undefined, viewer: Express.User, actor: Actor) {
-    if (!file) throw new ValidationError({ file: 'Choose a photo or PDF to upload.' });
+  async upload(query: MediaOwnerQuery, file: UploadedFile | undefined, viewer: Express.User, actor: Actor, accepts: UploadAccepts = 'photo-or-document') {
+    if (!file) throw new ValidationError({ file: accepts === 'audio' ? 'Choose an MP3, M4A or Ogg file to upload.' : 'Choose a photo or PDF to upload.' });
     let work: string | null = null;
     let storageKey: string | null = null;
     try {
@@ -104,10 +133,11 @@ export class MediaService {
       const owner = await this.ownerOf(this.store.repos, query.ownerType, query.ownerId);
       if (owner.locked) throw new ConflictError('This report is submitted, so its photos no longer change. Amend it to add photos.');
       const type = await fileTypeFromFile(file.path);
-      if (!type || !(MEDIA_FORMATS as readonly string[]).includes(type.mime)) {
-        throw new ApiError(415, 'unsupported_media_type', 'This file is not a JPEG, PNG, WebP or PDF file, whatever its name says.', { file: 'Not a JPEG, PNG, WebP or PDF file.' });
+      const formats: readonly string[] = accepts === 'audio' ? AUDIO_FORMATS : UPLOAD_FORMATS;
+      if (!type || !formats.includes(type.mime)) {
+        throw new ApiError(415, 'unsupported_media_type', REFUSED[accepts].message, { file: REFUSED[accepts].field });
       }
-      const kind = (PHOTO_FORMATS as readonly string[]).includes(type.mime) ? 'photo' : 'document';
+      const kind = accepts === 'audio' ? 'audio' : (PHOTO_FORMATS as readonly string[]).includes(type.mime) ? 'photo' : 'document';
       work = await this.files.scratch(`media-${randomUUID()}`);
       const original = path.join(work, `original.${EXTENSIONS[type.mime]}`);
       await this.files.moveIn(file.path, path.relative(this.files.root, original));
@@ -116,7 +146,7 @@ export class MediaService {
         facts = await makeDerivatives(original, work).catch(() => {
           throw new ApiError(415, 'unsupported_media_type', 'This file could not be read as an image. It may be damaged.', { file: 'Unreadable image.' });
         });
-      } else if (!(DOCUMENT_FORMATS as readonly string[]).includes(type.mime)) {
+      } else if (kind === 'document' && !(DOCUMENT_FORMATS as readonly string[]).includes(type.mime)) {
         throw new ApiError(415, 'unsupported_media_type', 'Only PDF documents are accepted.', { file: 'Not a PDF.' });
       }
       const sha256 = await sha256File(original);
@@ -153,7 +183,7 @@ export class MediaService {
           entityType: 'media',
           entityId: media.id,
           vesselId: owner.vesselId,
-          summary: `${kind === 'photo' ? 'Photo' : 'Document'} ${media.fileName} added to ${owner.label}`,
+          summary: `${KIND_LABELS[kind]} ${media.fileName} added to ${owner.label}`,
         });
         return media;
       });
@@ -201,7 +231,7 @@ export class MediaService {
         entityType: 'media',
         entityId: id,
         vesselId: media.vesselId,
-        summary: `${media.kind === 'photo' ? 'Photo' : 'Document'} ${media.fileName} deleted from ${media.ownerType} ${media.ownerId}`,
+        summary: `${KIND_LABELS[media.kind]} ${media.fileName} deleted from ${media.ownerType} ${media.ownerId}`,
         changes: changesBetween({} as MediaEntity, media, ['fileName', 'caption', 'credit', 'altText', 'rights', 'sha256']),
       });
       return media;

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { listQuery, pageOf } from './common.js';
 import { line } from './text.js';
 
-export const AUDIT_ACTIONS = ['create', 'update', 'delete', 'archive', 'move', 'import', 'upload', 'submit', 'amend', 'restore', 'deactivate', 'reactivate', 'invite', 'resend', 'revoke', 'accept', 'sign-in', 'sign-in-failed', 'sign-out', 'password-reset-request', 'password-reset', 'password-change', 'refund', 'export', 'publish', 'unpublish', 'payment'] as const;
+export const AUDIT_ACTIONS = ['create', 'update', 'delete', 'archive', 'move', 'import', 'upload', 'submit', 'amend', 'restore', 'deactivate', 'reactivate', 'invite', 'resend', 'revoke', 'accept', 'sign-in', 'sign-in-failed', 'sign-out', 'password-reset-request', 'password-reset', 'password-change', 'approve', 'return', 'retire', 'comment', 'refund', 'export', 'publish', 'unpublish', 'payment'] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];
 
 export const auditChange = z.object({ from: z.unknown(), to: z.unknown() });

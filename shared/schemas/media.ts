@@ -2,15 +2,20 @@ import { z } from 'zod';
 import { freeText, line } from './text.js';
 
 /** A treatment's photos are of two kinds, before and after the work: one owner type each. */
-export const MEDIA_OWNER_TYPES = ['artifact', 'compartment', 'condition-report', 'incident', 'treatment-before', 'treatment-after'] as const;
+export const MEDIA_OWNER_TYPES = ['artifact', 'compartment', 'condition-report', 'incident', 'treatment-before', 'treatment-after', 'tour'] as const;
 export type MediaOwnerType = (typeof MEDIA_OWNER_TYPES)[number];
 
-export const MEDIA_KINDS = ['photo', 'document'] as const;
+export const MEDIA_KINDS = ['photo', 'document', 'audio'] as const;
 export type MediaKind = (typeof MEDIA_KINDS)[number];
 
 export const PHOTO_FORMATS = ['image/jpeg', 'image/png', 'image/webp'] as const;
 export const DOCUMENT_FORMATS = ['application/pdf'] as const;
-export const MEDIA_FORMATS = [...PHOTO_FORMATS, ...DOCUMENT_FORMATS] as const;
+/** A stop's audio clip: MP3, M4A or Ogg, as file-type names them by content. */
+export const AUDIO_FORMATS = ['audio/mpeg', 'audio/x-m4a', 'audio/ogg', 'audio/ogg; codecs=opus'] as const;
+export const AUDIO_ACCEPT = '.mp3,.m4a,.ogg,.oga,.opus,audio/mpeg,audio/mp4,audio/x-m4a,audio/ogg';
+/** What the general upload takes (audio comes only through a tour). */
+export const UPLOAD_FORMATS = [...PHOTO_FORMATS, ...DOCUMENT_FORMATS] as const;
+export const MEDIA_FORMATS = [...UPLOAD_FORMATS, ...AUDIO_FORMATS] as const;
 /** The file picker's accept list. */
 export const MEDIA_ACCEPT = '.jpg,.jpeg,.png,.webp,.pdf,image/jpeg,image/png,image/webp,application/pdf';
 
@@ -51,7 +56,7 @@ export type Media = z.infer<typeof media>;
 export const mediaList = z.array(media);
 
 export const mediaOwnerQuery = z.object({
-  ownerType: z.enum(MEDIA_OWNER_TYPES, { error: 'Say what the file belongs to: artifact, compartment, condition-report, incident, treatment-before or treatment-after.' }),
+  ownerType: z.enum(MEDIA_OWNER_TYPES, { error: 'Say what the file belongs to: artifact, compartment, condition-report, incident, treatment-before, treatment-after or tour.' }),
   ownerId: z.coerce.number({ error: 'Give the id of the record the file belongs to.' }).int().positive(),
 });
 export type MediaOwnerQuery = z.infer<typeof mediaOwnerQuery>;

@@ -21,6 +21,7 @@ export const STAFF_NAV: NavEntry[] = [
   { label: 'Incidents', icon: 'pi pi-exclamation-triangle', route: 'incidents', permission: { resource: 'incident', action: 'read' } },
   { label: 'Interpretation', icon: 'pi pi-book', route: 'interpretations', permission: { resource: 'interpretation', action: 'read' } },
   { label: 'Risk register', icon: 'pi pi-sort-amount-down', route: 'risks', permission: { resource: 'risk', action: 'read' } },
+  { label: 'Tours', icon: 'pi pi-directions', route: 'tours', permission: { resource: 'tour', action: 'read' } },
   { label: 'Repair projects', icon: 'pi pi-wrench', route: 'repair-projects', permission: { resource: 'repairProject', action: 'read' } },
   { label: 'Giving', icon: 'pi pi-heart', route: 'giving', permission: { resource: 'donation', action: 'read' } },
   { label: 'People', icon: 'pi pi-users', route: 'people', permission: { resource: 'user', action: 'read' } },

@@ -25,6 +25,7 @@ const EXPECTED: Record<MediaOwnerType, Record<Who, 200 | 401 | 403>> = {
   compartment: ALL_STAFF,
   incident: ALL_STAFF,
   'condition-report': FINDINGS_READERS,
+  tour: ALL_STAFF,
   // A treatment's photos show the work done, for every staff role (the fundraiser tells its story).
   'treatment-before': ALL_STAFF,
   'treatment-after': ALL_STAFF,

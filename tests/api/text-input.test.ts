@@ -25,7 +25,7 @@ afterAll(() => ctx.close());
 /** Passwords at sign-in are compared, never stored or shown: any password that exists is taken. */
 const NOT_TEXT = new Set(['password', 'currentPassword']);
 /** Fields of several lines, which keep tabs and line breaks. */
-const FREE_TEXT = new Set(['description', 'significance', 'reason', 'summary', 'overrideReason', 'recommendedAction', 'notes', 'statement', 'caption', 'altText', 'rights', 'actionsTaken', 'contractorNotes', 'permitNotes', 'note', 'method', 'acknowledgmentStatement', 'comment']);
+const FREE_TEXT = new Set(['description', 'significance', 'reason', 'summary', 'overrideReason', 'recommendedAction', 'notes', 'statement', 'caption', 'altText', 'rights', 'actionsTaken', 'contractorNotes', 'permitNotes', 'note', 'method', 'acknowledgmentStatement', 'transcript', 'accessNotes', 'lookFor', 'comment', 'body']);
 
 type Def = { type: string; shape?: Record<string, z.ZodType>; innerType?: z.ZodType; in?: z.ZodType; options?: z.ZodType[]; format?: string };
 const defOf = (schema: z.ZodType) => (schema as unknown as { _zod: { def: Def } })._zod.def;

@@ -65,6 +65,15 @@ const MATRIX: Record<string, Record<Role, boolean>> = {
   'incident.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
   'incident.create': { admin: false, curator: true, conservator: true, docent: true, fundraiser: false },
   'incident.update': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },
+  // Tours: docents write and submit, curators publish; every staff role reads.
+  'tour.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
+  'tour.create': { admin: false, curator: true, conservator: false, docent: true, fundraiser: false },
+  'tour.update': { admin: false, curator: true, conservator: false, docent: true, fundraiser: false },
+  'tour.submit': { admin: false, curator: true, conservator: false, docent: true, fundraiser: false },
+  'tour.comment': { admin: false, curator: true, conservator: false, docent: true, fundraiser: false },
+  'tour.approve': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
+  'tour.return': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
+  'tour.retire': { admin: false, curator: true, conservator: false, docent: false, fundraiser: false },
   // Repairs: curators and conservators plan them (approving is the curator's, in the service); fundraisers and all staff read.
   'repairProject.read': { admin: true, curator: true, conservator: true, docent: true, fundraiser: true },
   'repairProject.create': { admin: false, curator: true, conservator: true, docent: false, fundraiser: false },

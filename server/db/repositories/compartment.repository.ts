@@ -1,4 +1,4 @@
-import type { EntityManager } from 'typeorm';
+import { In, type EntityManager } from 'typeorm';
 import type { CompartmentsQuery } from '../../../shared/schemas/compartments.js';
 import { CompartmentEntity } from '../entities/compartment.entity.js';
 import { HazardEntity } from '../entities/hazard.entity.js';
@@ -13,6 +13,18 @@ export class CompartmentRepository {
 
   findById(id: number) {
     return this.repo.findOne({ where: { id }, relations: { deck: true } });
+  }
+
+  /** The given compartments with their decks, in one query. */
+  withDecks(ids: number[]) {
+    return ids.length ? this.repo.find({ where: { id: In([...new Set(ids)]) }, relations: { deck: true } }) : Promise.resolve([]);
+  }
+
+  /** Access status of the given compartments (the public tour checks it on every request). */
+  async accessOf(ids: number[]): Promise<Map<number, CompartmentEntity['accessStatus']>> {
+    if (!ids.length) return new Map();
+    const rows = await this.repo.find({ select: { id: true, accessStatus: true }, where: { id: In([...new Set(ids)]) } });
+    return new Map(rows.map((c) => [c.id, c.accessStatus]));
   }
 
   findByDesignation(vesselId: number, designationKey: string) {

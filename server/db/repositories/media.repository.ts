@@ -1,4 +1,4 @@
-import type { EntityManager } from 'typeorm';
+import { In, type EntityManager } from 'typeorm';
 import type { MediaOwnerType } from '../../../shared/schemas/media.js';
 import { MediaEntity } from '../entities/media.entity.js';
 
@@ -11,6 +11,10 @@ export class MediaRepository {
 
   findById(id: number) {
     return this.repo.findOne({ where: { id }, relations: { uploadedBy: true } });
+  }
+
+  findByIds(ids: number[]) {
+    return ids.length ? this.repo.findBy({ id: In([...new Set(ids)]) }) : Promise.resolve([]);
   }
 
   forOwner(ownerType: MediaOwnerType, ownerId: number) {

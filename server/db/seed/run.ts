@@ -8,6 +8,7 @@ import { seedDemoCondition } from './seed-condition.js';
 import { seedDemoRepairs } from './seed-repairs.js';
 import { seedDemoGiving } from './seed-giving.js';
 import { seedDemoInterpretation } from './seed-interpretation.js';
+import { seedDemoTours } from './seed-tours.js';
 import { FileStore } from '../../storage/file-store.js';
 
 const config = loadConfig();
@@ -24,6 +25,7 @@ try {
   // after the repair projects' demo: it appeals for the fundraising ones
   await seedDemoGiving(dataSource);
   await seedDemoInterpretation(dataSource, config);
+  await seedDemoTours(dataSource, config);
   await dataSource.destroy();
   console.log(`Demo data written to ${config.databasePath}.`);
 } catch (err) {
