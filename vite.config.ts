@@ -19,6 +19,9 @@ export default defineConfig({
     alias: {
       '@': fileURLToPath(new URL('./src', import.meta.url)),
       '@shared': fileURLToPath(new URL('./shared', import.meta.url)),
+      // One Leaflet: @vue-leaflet imports the ESM build (only when not told to use the global `L`, which
+      // we always do), our code, markercluster and geoman the UMD build that sets `L`; both were shipped
+      'leaflet/dist/leaflet-src.esm': 'leaflet/dist/leaflet-src.js',
     },
   },
   server: {
