@@ -2,7 +2,6 @@ import type { Action, Resource } from '@shared/permissions';
 import { createRouter, createWebHistory } from 'vue-router';
 import { whenUnauthenticated } from '@/api/client';
 import { useSessionStore } from '@/stores/session';
-import SignInView from '@/views/SignInView.vue';
 
 /** A resource with one of its own actions (a plain `Action` would allow only those every resource has). */
 type ScreenPermission = { [R in Resource]: { resource: R; action: Action<R> } }[Resource];
@@ -22,7 +21,7 @@ export const router = createRouter({
   scrollBehavior: () => ({ top: 0 }),
   routes: [
     { path: '/', redirect: { name: 'visit-home' } },
-    { path: '/sign-in', name: 'sign-in', component: SignInView, meta: { title: 'Sign in' } },
+    { path: '/sign-in', name: 'sign-in', component: () => import('@/views/SignInView.vue'), meta: { title: 'Sign in' } },
     { path: '/forgot-password', name: 'forgot-password', component: () => import('@/views/ForgotPasswordView.vue'), meta: { title: 'Forgot password' } },
     { path: '/reset-password', name: 'reset-password', component: () => import('@/views/ResetPasswordView.vue'), meta: { title: 'Choose a new password' } },
     { path: '/invitation', name: 'accept-invitation', component: () => import('@/views/AcceptInvitationView.vue'), meta: { title: 'Accept your invitation' } },
