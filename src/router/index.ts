@@ -70,6 +70,7 @@ export const router = createRouter({
 });
 
 router.beforeEach(async (to) => {
+  if (!to.path.startsWith('/visit')) await import('@/theme-all').then((m) => m.addAllComponentTokens());
   const session = useSessionStore();
   if (to.matched.some((r) => r.meta.staff)) {
     const user = await session.load().catch(() => null);

@@ -1,6 +1,7 @@
 import { existsSync, readdirSync, readFileSync, statSync } from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { PUBLIC_COMPONENT_TOKENS } from '../../src/theme.js';
 
 // What a page pulls in before it can draw is the closure of its static imports (`import()` makes a
 // chunk of its own). These walk that closure in the source, so a public page that starts to reach
@@ -55,6 +56,13 @@ describe('the code a page needs before it draws', () => {
     expect(files.filter((f) => f.startsWith('src/views/') && !f.startsWith('src/views/visit/'))).toEqual([]);
     expect(files.filter((f) => /src\/(components\/(Deck|Condition|Risk|Media|RichText|Compartment|Artifact|Incident|RepairProject|People)|stores\/)/.test(f))).toEqual([]);
     expect(packages.filter((p) => HEAVY.test(p))).toEqual([]);
+  });
+
+  it('finds the design tokens of every PrimeVue component a public page uses in the entry theme', () => {
+    const { packages } = closure([...sourcesIn('src/views/visit'), ...sourcesIn('src/components/visit')]);
+    const used = packages.filter((p) => /^primevue\/[a-z]+$/.test(p) && !/^primevue\/use/.test(p)).map((p) => p.slice('primevue/'.length));
+    expect(used.length).toBeGreaterThan(0);
+    expect(used.filter((name) => !(name in PUBLIC_COMPONENT_TOKENS))).toEqual([]);
   });
 
   it('sees an import it should refuse (the walk itself works)', () => {
