@@ -2,6 +2,10 @@ import type { Action, Resource } from '@shared/permissions';
 import { createRouter, createWebHistory } from 'vue-router';
 import { whenUnauthenticated } from '@/api/client';
 import { useSessionStore } from '@/stores/session';
+// The landing page is in the entry: a visitor's first page then needs no second round of chunks
+// (every other page is its own chunk; tests/unit/public-code.test.ts keeps it that way)
+import VisitHomeView from '@/views/visit/VisitHomeView.vue';
+import VisitLayout from '@/views/visit/VisitLayout.vue';
 
 /** A resource with one of its own actions (a plain `Action` would allow only those every resource has). */
 type ScreenPermission = { [R in Resource]: { resource: R; action: Action<R> } }[Resource];
@@ -27,9 +31,9 @@ export const router = createRouter({
     { path: '/invitation', name: 'accept-invitation', component: () => import('@/views/AcceptInvitationView.vue'), meta: { title: 'Accept your invitation' } },
     {
       path: '/visit',
-      component: () => import('@/views/visit/VisitLayout.vue'),
+      component: VisitLayout,
       children: [
-        { path: '', name: 'visit-home', component: () => import('@/views/visit/VisitHomeView.vue'), meta: { title: 'Visit' } },
+        { path: '', name: 'visit-home', component: VisitHomeView, meta: { title: 'Visit' } },
         { path: 'appeals', name: 'visit-appeals', component: () => import('@/views/visit/VisitAppealsView.vue'), meta: { title: 'Help us repair' } },
         { path: 'appeals/:slug', name: 'visit-appeal', component: () => import('@/views/visit/VisitAppealView.vue'), meta: { title: 'Help us repair' } },
         { path: 'appeals/:slug/thanks', name: 'visit-gift-thanks', component: () => import('@/views/visit/VisitGiftThanksView.vue'), meta: { title: 'Thank you' } },
