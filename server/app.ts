@@ -13,6 +13,7 @@ import type { Config } from './config.js';
 import { Store } from './db/store.js';
 import type { FakeMailServer } from './fakes/mail-server.js';
 import { ApiRouter, type RouteSpec } from './http/api-router.js';
+import { serveClient } from './http/client-files.js';
 import { apiNotFound, errorHandler } from './http/error-handler.js';
 import { ApiError } from './http/errors.js';
 import { buildOpenApiDocument } from './http/openapi.js';
@@ -196,16 +197,7 @@ export function createApp({ config, dataSource, fakeMail, stripe = createStripeC
     next();
   });
   // The client is served before the session middleware, so its files never carry or refresh a cookie
-  const indexHtml = path.join(config.clientDir, 'index.html');
-  const hasClient = existsSync(indexHtml);
-  if (hasClient) {
-    app.use('/assets', express.static(path.join(config.clientDir, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }));
-    app.use(express.static(config.clientDir, { index: false }));
-    app.get(/^(?!\/api(?:\/|$)).*/, (_req, res) => {
-      res.setHeader('Cache-Control', 'no-cache');
-      res.sendFile(indexHtml);
-    });
-  }
+  if (existsSync(path.join(config.clientDir, 'index.html'))) serveClient(app, config.clientDir);
   // Stripe signs the body as sent: the webhook keeps it raw (and body-parser's json then leaves it alone)
   app.use(WEBHOOK_PATH, express.raw({ type: () => true, limit: '1mb' }));
   app.use(express.json({ limit: '1mb' }));

@@ -1,5 +1,4 @@
-import '@fontsource/merriweather/latin-400.css';
-import '@fontsource/merriweather/latin-700.css';
+import './assets/fonts.css';
 import 'primeicons/primeicons.css';
 import './assets/base.css';
 

@@ -1,5 +1,20 @@
 import { definePreset } from '@primeuix/themes';
-import Aura from '@primeuix/themes/aura';
+import base from '@primeuix/themes/aura/base';
+import button from '@primeuix/themes/aura/button';
+import css from '@primeuix/themes/aura/css';
+import message from '@primeuix/themes/aura/message';
+import skeleton from '@primeuix/themes/aura/skeleton';
+import tooltip from '@primeuix/themes/aura/tooltip';
+
+/**
+ * The design tokens of the PrimeVue components the public pages use: the whole Aura set is most
+ * of the entry chunk, so a visitor's phone gets these and the router adds the rest (theme-all.ts)
+ * before any other page. A public page that uses another component must add it here
+ * (tests/unit/public-code.test.ts fails until it does).
+ */
+export const PUBLIC_COMPONENT_TOKENS = { button, message, skeleton, tooltip };
+// aura/css's default export is the CSS string its index.d.ts calls a named `css`
+const Aura = { ...base, components: PUBLIC_COMPONENT_TOKENS, css: css as unknown as string };
 
 /** Our palette: harbour blue for actions, brass for accents, warm paper for the page. */
 export const ShipkeeperTheme = definePreset(Aura, {

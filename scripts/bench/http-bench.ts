@@ -9,9 +9,9 @@ function percentile(sorted: number[], p: number) {
   return sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)]!;
 }
 
-export async function startServer(dataDir: string, port: number) {
+export async function startServer(dataDir: string, port: number, env: Record<string, string> = {}) {
   const child = spawn('node_modules/.bin/tsx', ['--tsconfig', 'tsconfig.node.json', 'server/index.ts'], {
-    env: { ...process.env, PORT: String(port), DATA_DIR: dataDir, SEED_ON_START: 'false', FAKE_SMTP_PORT: '0' },
+    env: { ...process.env, PORT: String(port), DATA_DIR: dataDir, SEED_ON_START: 'false', FAKE_SMTP_PORT: '0', ...env },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   let output = '';

@@ -2,7 +2,10 @@ import type { Action, Resource } from '@shared/permissions';
 import { createRouter, createWebHistory } from 'vue-router';
 import { whenUnauthenticated } from '@/api/client';
 import { useSessionStore } from '@/stores/session';
-import SignInView from '@/views/SignInView.vue';
+// The landing page is in the entry: a visitor's first page then needs no second round of chunks
+// (every other page is its own chunk; tests/unit/public-code.test.ts keeps it that way)
+import VisitHomeView from '@/views/visit/VisitHomeView.vue';
+import VisitLayout from '@/views/visit/VisitLayout.vue';
 
 /** A resource with one of its own actions (a plain `Action` would allow only those every resource has). */
 type ScreenPermission = { [R in Resource]: { resource: R; action: Action<R> } }[Resource];
@@ -24,15 +27,15 @@ export const router = createRouter({
   scrollBehavior: (to, from) => (to.meta.queryState && to.name === from.name ? false : { top: 0 }),
   routes: [
     { path: '/', redirect: { name: 'visit-home' } },
-    { path: '/sign-in', name: 'sign-in', component: SignInView, meta: { title: 'Sign in' } },
+    { path: '/sign-in', name: 'sign-in', component: () => import('@/views/SignInView.vue'), meta: { title: 'Sign in' } },
     { path: '/forgot-password', name: 'forgot-password', component: () => import('@/views/ForgotPasswordView.vue'), meta: { title: 'Forgot password' } },
     { path: '/reset-password', name: 'reset-password', component: () => import('@/views/ResetPasswordView.vue'), meta: { title: 'Choose a new password' } },
     { path: '/invitation', name: 'accept-invitation', component: () => import('@/views/AcceptInvitationView.vue'), meta: { title: 'Accept your invitation' } },
     {
       path: '/visit',
-      component: () => import('@/views/visit/VisitLayout.vue'),
+      component: VisitLayout,
       children: [
-        { path: '', name: 'visit-home', component: () => import('@/views/visit/VisitHomeView.vue'), meta: { title: 'Visit' } },
+        { path: '', name: 'visit-home', component: VisitHomeView, meta: { title: 'Visit' } },
         { path: 'appeals', name: 'visit-appeals', component: () => import('@/views/visit/VisitAppealsView.vue'), meta: { title: 'Help us repair' } },
         { path: 'appeals/:slug', name: 'visit-appeal', component: () => import('@/views/visit/VisitAppealView.vue'), meta: { title: 'Help us repair' } },
         { path: 'appeals/:slug/thanks', name: 'visit-gift-thanks', component: () => import('@/views/visit/VisitGiftThanksView.vue'), meta: { title: 'Thank you' } },
@@ -76,6 +79,7 @@ export const router = createRouter({
 });
 
 router.beforeEach(async (to) => {
+  if (!to.path.startsWith('/visit')) await import('@/theme-all').then((m) => m.addAllComponentTokens());
   const session = useSessionStore();
   if (to.matched.some((r) => r.meta.staff)) {
     const user = await session.load().catch(() => null);
