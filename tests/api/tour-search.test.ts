@@ -33,15 +33,19 @@ describe('tours in the full-text search', () => {
   it('finds a tour by a word only in a stop’s text, and no longer after the stop is edited', async () => {
     const below = await newTour('Below the waterline', 'below-the-waterline', 'Down the ladders to the shaft alley.');
     const deck = await newTour('Along the main deck', 'along-the-main-deck', 'Step-free, from the gangway aft.');
-    const withStop = (await docent.post(`/api/v1/tours/${below.id}/stops`, { compartmentId: place.first, title: 'The store room', textDoc: paragraph('Spare gauge glasses were kept in oilcloth.') })).body;
+    const withStop = (await docent.post(`/api/v1/tours/${below.id}/stops`, { compartmentId: place.first, title: 'The store room', textDoc: paragraph('Spare gauge glasses were kept below, in oilcloth.') })).body;
     const stop = withStop.stops[0];
 
     const found = (await docent.get(`/api/v1/vessels/${vesselId}/tours?q=oilcloth`)).body;
     expect(ids(found)).toEqual([below.id]);
-    expect(found.items[0].snippet).toBe(`The store room: Spare gauge glasses were kept in ${HIGHLIGHT_START}oilcloth${HIGHLIGHT_END}.`);
+    expect(found.items[0].snippet).toBe(`The store room: Spare gauge glasses were kept below, in ${HIGHLIGHT_START}oilcloth${HIGHLIGHT_END}.`);
     // The tour's own words, stemmed like every search ("gangway" from "gangways"), and a typed prefix.
     expect(ids((await docent.get(`/api/v1/vessels/${vesselId}/tours?q=gangways`)).body)).toEqual([deck.id]);
     expect(ids((await docent.get(`/api/v1/vessels/${vesselId}/tours?q=waterl`)).body)).toEqual([below.id]);
+    // A word of the title and of a stop: the stop's marked words are the snippet, not the unmarked summary.
+    const both = (await docent.get(`/api/v1/vessels/${vesselId}/tours?q=below`)).body;
+    expect(both.items.map((t: { id: number; snippet: string }) => [t.id, t.snippet])).toEqual([[below.id, `The store room: Spare gauge glasses were kept ${HIGHLIGHT_START}below${HIGHLIGHT_END}, in oilcloth.`]]);
+    expect((await docent.get(`/api/v1/vessels/${vesselId}/tours?q=gangway`)).body.items[0].snippet).toBe(`Step-free, from the ${HIGHLIGHT_START}gangway${HIGHLIGHT_END} aft.`);
 
     const edited = await docent.patch(`/api/v1/tours/${below.id}/stops/${stop.id}`, { textDoc: paragraph('Spare gauge glasses were kept in sawdust.'), version: stop.version });
     expect(edited.status, JSON.stringify(edited.body)).toBe(200);

@@ -48,17 +48,20 @@ export class TourRepository {
     if (tourMatch && stopMatch && page.items.length) {
       const ids = page.items.map((t) => BigInt(t.id));
       const marks = `'${HIGHLIGHT_START}', '${HIGHLIGHT_END}', '…', 16`;
-      // The tour's own words first; otherwise its best-ranked stop (marks for this page's rows only).
+      // The tour's own marked words first, then its best-ranked stop (marks for this page's rows only).
       const own = (await this.manager.query(
         `SELECT record_id AS id, snippet(${SEARCH_TABLE}, 6, ${marks}) AS snippet FROM ${SEARCH_TABLE} WHERE ${SEARCH_TABLE} MATCH ? AND record_id IN (${ids.map(() => '?').join(', ')})`,
         [tourMatch, ...ids],
       )) as { id: number; snippet: string }[];
-      for (const row of own) snippets.set(Number(row.id), mergeHighlights(row.snippet));
+      // A match in the title alone leaves the summary unmarked: a stop's marked words say more.
+      const unmarked = new Map<number, string>();
+      for (const row of own) (row.snippet.includes(HIGHLIGHT_START) ? snippets : unmarked).set(Number(row.id), mergeHighlights(row.snippet));
       const stops = (await this.manager.query(
         `SELECT s."tourId" AS id, s.title AS title, snippet(${SEARCH_TABLE}, 6, ${marks}) AS snippet FROM ${SEARCH_TABLE} JOIN tour_stops s ON s.id = ${SEARCH_TABLE}.record_id WHERE ${SEARCH_TABLE} MATCH ? AND s."tourId" IN (${ids.map(() => '?').join(', ')}) ORDER BY ${RANK_EXPRESSION}`,
         [stopMatch, ...ids],
       )) as { id: number; title: string; snippet: string }[];
       for (const row of stops) if (!snippets.has(Number(row.id))) snippets.set(Number(row.id), `${row.title}: ${mergeHighlights(row.snippet)}`);
+      for (const [id, text] of unmarked) if (!snippets.has(id) && text) snippets.set(id, text);
     }
     return { ...page, items: page.items.map((tour) => ({ tour, snippet: snippets.get(tour.id) ?? null })) };
   }
