@@ -3,6 +3,7 @@ import {
   interpretation,
   interpretationActionBody,
   interpretationPage,
+  interpretationRevisionParams,
   interpretationRevisions,
   interpretationsQuery,
   publicInterpretation,
@@ -61,6 +62,19 @@ export function interpretationRoutes(api: ApiRouter, interpretations: Interpreta
       response: interpretationRevisions,
       errors: [404],
       handler: ({ params }) => interpretations.revisions(type, params.id),
+    });
+
+    api.route({
+      method: 'post',
+      path: `${base}/revisions/:number/restore`,
+      tag,
+      summary: `Restore a revision (by its number) of ${noun}'s draft, kept as a new revision; the text goes back to draft (out of review, or a new draft beside what is published)`,
+      access: allowed('interpretation', 'update'),
+      params: interpretationRevisionParams,
+      body: interpretationActionBody,
+      response: interpretation,
+      errors: [404, 409],
+      handler: ({ req, params, body }) => interpretations.restore(type, params.id, params.number, body.version, req.user!, actorOf(req)),
     });
 
     api.route({

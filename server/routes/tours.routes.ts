@@ -28,7 +28,7 @@ export function tourRoutes(api: ApiRouter, tours: TourService, files: MediaServi
     method: 'get',
     path: '/vessels/:vesselId/tours',
     tag,
-    summary: 'The tours of a vessel (filter by `state`)',
+    summary: 'The tours of a vessel (paged; filter by `state`); `q` searches the words of their titles, summaries and stops, with a snippet of where they were found',
     access: allowed('tour', 'read'),
     params: vesselToursParams,
     query: toursQuery,

@@ -12,7 +12,7 @@ import { HIGHLIGHT_END, HIGHLIGHT_START } from '../../shared/schemas/artifacts.j
  * stem of the word it begins ("conditio" of "condition", stored as "condit") finds nothing until it
  * is completed.
  */
-export const SEARCH_KINDS = ['artifact', 'condition-report', 'interpretation'] as const;
+export const SEARCH_KINDS = ['artifact', 'condition-report', 'interpretation', 'tour', 'tour-stop'] as const;
 export type SearchKind = (typeof SEARCH_KINDS)[number];
 
 export const SEARCH_TABLE = 'search_documents';

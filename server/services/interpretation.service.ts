@@ -147,15 +147,49 @@ export class InterpretationService {
         record.lastEditedById = viewer.id;
         record = await repos.interpretations.save(record);
       }
-      const number = (await repos.interpretations.revisionCount(record.id)) + 1;
-      await repos.interpretations.addRevision({ interpretationId: record.id, number, content: texts, savedById: viewer.id, savedAt: new Date() });
-      await repos.search.put({ kind: 'interpretation', recordId: record.id, vesselId: subject.vesselId, number: '', title: subject.label, body: searchBody(texts), extra: AUDIENCES.filter((a) => texts[a]).map((a) => AUDIENCE_LABELS[a]).join(' ') });
+      const number = await this.keepRevision(repos, subject, record, texts, viewer);
       await recordAudit(repos, actor, {
         action: 'update',
         entityType: 'interpretation',
         entityId: record.id,
         vesselId: subject.vesselId,
         summary: `Interpretation of ${subject.label} saved (revision ${number})${wasInReview ? ', taken out of review' : ''}`,
+      });
+    });
+    return this.get(type, id, viewer);
+  }
+
+  /** Keeps the draft as it now is as the next revision, and puts its words in the search index (inside the change's transaction). */
+  private async keepRevision(repos: Repositories, subject: Subject, record: InterpretationEntity, texts: InterpretationTexts, viewer: Express.User): Promise<number> {
+    const number = (await repos.interpretations.revisionCount(record.id)) + 1;
+    await repos.interpretations.addRevision({ interpretationId: record.id, number, content: texts, savedById: viewer.id, savedAt: new Date() });
+    await repos.search.put({ kind: 'interpretation', recordId: record.id, vesselId: subject.vesselId, number: '', title: subject.label, body: searchBody(texts), extra: AUDIENCES.filter((a) => texts[a]).map((a) => AUDIENCE_LABELS[a]).join(' ') });
+    return number;
+  }
+
+  /**
+   * Makes the draft what it was in an earlier revision, kept as a new revision; like any save it
+   * takes the text out of review or starts a new draft beside what is published. Restoring a
+   * revision equal to the draft changes nothing.
+   */
+  async restore(type: InterpretationSubject, id: number, revisionNumber: number, version: number, viewer: Express.User, actor: Actor) {
+    await this.store.transaction(async (repos) => {
+      const { subject, record } = await this.load(repos, type, id, version);
+      const revision = await repos.interpretations.findRevision(record.id, revisionNumber);
+      if (!revision) throw new NotFoundError(`Revision ${revisionNumber} of this interpretation`);
+      if (sameTexts(record.draft, revision.content)) return;
+      const wasInReview = record.state === 'in-review';
+      record.draft = structuredClone(revision.content);
+      record.state = 'draft';
+      record.lastEditedById = viewer.id;
+      const saved = await repos.interpretations.save(record);
+      const number = await this.keepRevision(repos, subject, saved, saved.draft, viewer);
+      await recordAudit(repos, actor, {
+        action: 'restore',
+        entityType: 'interpretation',
+        entityId: record.id,
+        vesselId: subject.vesselId,
+        summary: `Interpretation of ${subject.label}: revision ${revisionNumber} restored as revision ${number}${wasInReview ? ', taken out of review' : ''}`,
       });
     });
     return this.get(type, id, viewer);

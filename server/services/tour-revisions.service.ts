@@ -2,6 +2,7 @@ import type { RevisionCompare, RevisionSnapshot } from '../../shared/schemas/tou
 import type { Store } from '../db/store.js';
 import { NotFoundError, StaleVersionError, UnprocessableError } from '../http/errors.js';
 import { presentRevision } from '../presenters/tour.presenter.js';
+import { reindexTour } from '../search/tour-document.js';
 import { recordAudit, type Actor } from './audit.service.js';
 import { assertEditable, writeRevision } from './tour-revision.js';
 import type { TourService } from './tour.service.js';
@@ -77,7 +78,12 @@ export class TourRevisionService {
       Object.assign(tour, fields, { state: tour.state === 'published' ? 'draft' : tour.state });
       const saved = await repos.tours.save(tour);
       const keep = new Set(stops.map((s) => s.id));
-      for (const existing of await repos.tourStops.listFor(id)) if (!keep.has(existing.id)) await repos.tourStops.remove(existing.id);
+      const removed: number[] = [];
+      for (const existing of await repos.tourStops.listFor(id)) {
+        if (keep.has(existing.id)) continue;
+        await repos.tourStops.remove(existing.id);
+        removed.push(existing.id);
+      }
       for (const [position, s] of stops.entries()) {
         const current = await repos.tourStops.findPlain(s.id);
         if (current && current.tourId === id) {
@@ -87,6 +93,7 @@ export class TourRevisionService {
           await repos.tourStops.create({ ...s, tourId: id, position, textDoc: s.textDoc as never });
         }
       }
+      await reindexTour(repos, saved, removed);
       await writeRevision(repos, saved, `Revision ${number} restored`, viewer.id);
       await recordAudit(repos, actor, { action: 'restore', entityType: 'tour', entityId: id, vesselId: tour.vesselId, summary: `Tour “${tour.title}” restored to revision ${number}` });
     });

@@ -7,6 +7,7 @@ import type { Repositories, Store } from '../db/store.js';
 import { ConflictError, NotFoundError, StaleVersionError, UnprocessableError } from '../http/errors.js';
 import { presentTour, presentTourSummary } from '../presenters/tour.presenter.js';
 import { renderRichText } from '../richtext/render.js';
+import { tourDocument, tourStopDocument } from '../search/tour-document.js';
 import { changesBetween, recordAudit, type Actor } from './audit.service.js';
 import type { ClosureService } from './closure.service.js';
 import { staleEditError } from './stale-edit.js';
@@ -37,8 +38,8 @@ export class TourService {
   async list(vesselId: number, query: ToursQuery) {
     await this.vesselOrFail(vesselId);
     const page = await this.store.repos.tours.page(vesselId, query);
-    const counts = await this.store.repos.tourStops.counts(page.items.map((t) => t.id));
-    return { ...page, items: page.items.map((t) => presentTourSummary(t, counts.get(t.id) ?? 0)) };
+    const counts = await this.store.repos.tourStops.counts(page.items.map((i) => i.tour.id));
+    return { ...page, items: page.items.map(({ tour, snippet }) => ({ ...presentTourSummary(tour, counts.get(tour.id) ?? 0), snippet })) };
   }
 
   async get(id: number, viewer: Express.User) {
@@ -66,6 +67,7 @@ export class TourService {
       await this.checkTourFields(repos, vesselId, body, null);
       const tour = await repos.tours.create({ vesselId, ...body, createdById: viewer.id });
       await writeRevision(repos, tour, 'Tour created', viewer.id);
+      await repos.search.put(tourDocument(tour));
       await recordAudit(repos, actor, { action: 'create', entityType: 'tour', entityId: tour.id, vesselId, summary: `Tour “${tour.title}” created` });
       return tour.id;
     });
@@ -84,6 +86,7 @@ export class TourService {
       Object.assign(tour, fields);
       if (tour.state === 'published') tour.state = 'draft';
       const saved = await repos.tours.save(tour);
+      await repos.search.put(tourDocument(saved));
       await writeRevision(repos, saved, `Tour details changed: ${Object.keys(changes).join(', ')}`, viewer.id);
       await recordAudit(repos, actor, { action: 'update', entityType: 'tour', entityId: id, vesselId: tour.vesselId, summary: `Tour “${tour.title}” changed`, changes });
     });
@@ -122,6 +125,7 @@ export class TourService {
       await this.checkStop(repos, tour, body);
       const position = (await repos.tourStops.listFor(id)).length;
       const stop = await repos.tourStops.create({ tourId: id, position, ...body, ...{ textHtml: '', textPlain: '' }, ...this.rendered(body) });
+      await repos.search.put(tourStopDocument(stop, tour.vesselId));
       await writeRevision(repos, tour, `Stop ${position + 1} “${stop.title}” added`, viewer.id);
       await recordAudit(repos, actor, { action: 'create', entityType: 'tour-stop', entityId: stop.id, vesselId: tour.vesselId, summary: `Stop “${stop.title}” added to tour “${tour.title}”` });
     });
@@ -148,6 +152,7 @@ export class TourService {
       await this.checkStop(repos, tour, { ...stop, ...fields, artifactIds });
       Object.assign(stop, fields, { artifactIds }, this.rendered(fields));
       await repos.tourStops.save(stop);
+      await repos.search.put(tourStopDocument(stop, tour.vesselId));
       // The audit keeps what changed, not whole documents.
       if (changes.textDoc) changes.textDoc = { from: '(previous text)', to: stop.textPlain.slice(0, 200) };
       await writeRevision(repos, tour, `Stop ${stop.position + 1} “${stop.title}” changed: ${Object.keys(changes).join(', ')}`, viewer.id);
@@ -162,6 +167,7 @@ export class TourService {
       const stop = await this.stopOf(repos, id, stopId);
       assertEditable(tour);
       await repos.tourStops.remove(stopId);
+      await repos.search.remove('tour-stop', stopId);
       const rest = await repos.tourStops.listFor(id);
       for (const [i, s] of rest.entries()) if (s.position !== i) await repos.tourStops.setPosition(s.id, i);
       await writeRevision(repos, tour, `Stop “${stop.title}” removed`, viewer.id);

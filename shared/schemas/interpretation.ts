@@ -156,3 +156,5 @@ export const interpretationRevision = z
   .meta({ id: 'InterpretationRevision' });
 export type InterpretationRevision = z.infer<typeof interpretationRevision>;
 export const interpretationRevisions = z.array(interpretationRevision);
+/** A subject and one of its revisions, by the revision's number (as listed). */
+export const interpretationRevisionParams = z.object({ id: z.coerce.number().int().positive(), number: z.coerce.number().int().positive() });

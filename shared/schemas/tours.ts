@@ -121,9 +121,14 @@ export type Tour = z.infer<typeof tour>;
 
 export const toursQuery = listQuery(['title', 'updatedAt', 'state'], 'title').extend({
   state: z.enum(TOUR_STATES).optional(),
+  /** Words of the tour's title or summary, or of its stops' titles and text. */
+  q: line(200, 'Search').optional(),
 });
 export type ToursQuery = z.infer<typeof toursQuery>;
-export const tourPage = pageOf(tourSummary).meta({ id: 'TourPage' });
+/** A tour of the list; with `q`, a snippet of where the words were found (marked as the collection search marks them). */
+export const tourListItem = tourSummary.extend({ snippet: z.string().nullable() }).meta({ id: 'TourListItem' });
+export type TourListItem = z.infer<typeof tourListItem>;
+export const tourPage = pageOf(tourListItem).meta({ id: 'TourPage' });
 
 const tourFields = {
   title: text(160, 'Title'),

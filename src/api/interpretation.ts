@@ -12,3 +12,5 @@ export const returnInterpretation = (type: InterpretationSubject, id: number, ve
 
 export const listInterpretations = (vesselId: number, params: Partial<InterpretationsQuery>) => api.get<InterpretationPage>(`/vessels/${vesselId}/interpretations`, params);
 export const listInterpretationRevisions = (type: InterpretationSubject, id: number) => api.get<InterpretationRevision[]>(`${base(type, id)}/revisions`);
+export const restoreInterpretationRevision = (type: InterpretationSubject, id: number, number: number, version: number) =>
+  api.post<Interpretation>(`${base(type, id)}/revisions/${number}/restore`, { version });

@@ -1,9 +1,9 @@
 import type { Page } from '@shared/schemas/common';
 import type { Media } from '@shared/schemas/media';
-import type { CreateStopBody, CreateTourBody, PublishCheck, RevisionCompare, Tour, TourComment, TourRevisionSummary, ToursQuery, TourSummary, UpdateStopBody, UpdateTourBody } from '@shared/schemas/tours';
+import type { CreateStopBody, CreateTourBody, PublishCheck, RevisionCompare, Tour, TourComment, TourRevisionSummary, TourListItem, ToursQuery, UpdateStopBody, UpdateTourBody } from '@shared/schemas/tours';
 import { api, apiUrl, upload } from './client';
 
-export const listTours = (vesselId: number, params: Partial<ToursQuery>) => api.get<Page<TourSummary>>(`/vessels/${vesselId}/tours`, params);
+export const listTours = (vesselId: number, params: Partial<ToursQuery>) => api.get<Page<TourListItem>>(`/vessels/${vesselId}/tours`, params);
 export const createTour = (vesselId: number, body: CreateTourBody) => api.post<Tour>(`/vessels/${vesselId}/tours`, body);
 export const getTour = (id: number) => api.get<Tour>(`/tours/${id}`);
 export const updateTour = (id: number, body: UpdateTourBody) => api.patch<Tour>(`/tours/${id}`, body);

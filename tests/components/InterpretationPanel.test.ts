@@ -5,6 +5,7 @@ import { PiniaColada } from '@pinia/colada';
 import { DOMWrapper, flushPromises, mount } from '@vue/test-utils';
 import { createPinia } from 'pinia';
 import PrimeVue from 'primevue/config';
+import ConfirmationService from 'primevue/confirmationservice';
 import ToastService from 'primevue/toastservice';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { nextTick } from 'vue';
@@ -67,7 +68,7 @@ async function mountPanel(record: Interpretation, onPut: (body: Record<string, u
   );
   const wrapper = mount(InterpretationPanel, {
     props: { subjectType: 'artifact', subjectId: 6 },
-    global: { plugins: [createPinia(), PiniaColada, [PrimeVue, { unstyled: true }], ToastService] },
+    global: { plugins: [createPinia(), PiniaColada, [PrimeVue, { unstyled: true }], ToastService, ConfirmationService] },
     attachTo: document.body,
   });
   await flushPromises();

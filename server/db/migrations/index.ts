@@ -16,6 +16,7 @@ import { Tours1796410076474 } from './1796410076474-Tours.js';
 import { Interpretation1796410455538 } from './1796410455538-Interpretation.js';
 import { Giving1796410465930 } from './1796410465930-Giving.js';
 import { GivingRecentGifts1796413876346 } from './1796413876346-GivingRecentGifts.js';
+import { TourSearch1796414821822 } from './1796414821822-TourSearch.js';
 
 /** Every migration, oldest first; run at start by openDatabase(). */
-export const migrations = [Foundation1796204951114, ShipMap1796208163044, DeckPlans1796208850383, Collection1796215405776, ConditionReports1796217167359, Incidents1796217615866, Risks1796217692917, IncidentPublicNote1796284572668, HazardVersions1796284659278, SearchStemming1796285944020, MediaPublicUse1796286347768, DeckFramesRiskScale1796298366780, RepairProjects1796409916267, GivingSettings1796409933567, Tours1796410076474, Interpretation1796410455538, Giving1796410465930, GivingRecentGifts1796413876346];
+export const migrations = [Foundation1796204951114, ShipMap1796208163044, DeckPlans1796208850383, Collection1796215405776, ConditionReports1796217167359, Incidents1796217615866, Risks1796217692917, IncidentPublicNote1796284572668, HazardVersions1796284659278, SearchStemming1796285944020, MediaPublicUse1796286347768, DeckFramesRiskScale1796298366780, RepairProjects1796409916267, GivingSettings1796409933567, Tours1796410076474, Interpretation1796410455538, Giving1796410465930, GivingRecentGifts1796413876346, TourSearch1796414821822];

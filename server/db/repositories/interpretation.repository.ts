@@ -44,6 +44,10 @@ export class InterpretationRepository {
     return this.revisions.find({ where: { interpretationId }, relations: { savedBy: true }, order: { number: 'DESC' } });
   }
 
+  findRevision(interpretationId: number, number: number) {
+    return this.revisions.findOneBy({ interpretationId, number });
+  }
+
   revisionCount(interpretationId: number) {
     return this.revisions.countBy({ interpretationId });
   }
