@@ -13,7 +13,7 @@ const TEXT = 'Steam worked three times over in this engine, in three cylinders o
 const ALT = 'The triple-expansion engine seen from the starting platform';
 
 describe('a tour, from a docent to the public site', () => {
-  it('a docent writes a stop with a photo and submits; a curator approves and the public API serves it', async () => {
+  it('a docent writes a stop with a photo and a boiling-ladder explainer and submits; a curator approves and the public API serves it', async () => {
     const docent = await openBrowser();
     browsers.push(docent);
     let page = docent.page;
@@ -48,6 +48,11 @@ describe('a tour, from a docent to the public site', () => {
     await photo.getByLabel('Alt text (required)').fill(ALT);
     await photo.getByRole('button', { name: 'Insert photo' }).click();
     await expect.poll(() => stop.locator('.rich-text-editor__content img').count()).toBe(1);
+    // A boiling ladder with the dialog's own two stages (14.7 psia and 7 psia).
+    await stop.getByRole('button', { name: 'Explainer' }).click();
+    const explainer = page.getByRole('dialog', { name: 'Insert an explainer' });
+    await explainer.getByRole('button', { name: 'Insert explainer' }).click();
+    await expect.poll(() => stop.locator('.rich-text-editor__content [data-explainer="boiling-ladder"]').count()).toBe(1);
     await screenshot(page, 'tour-stop-dialog-1440');
     await stop.getByRole('button', { name: 'Add the stop' }).click();
     await expect.poll(() => page.getByRole('button', { name: 'The starting platform', exact: true }).isVisible(), { timeout: 10_000 }).toBe(true);
@@ -77,5 +82,6 @@ describe('a tour, from a docent to the public site', () => {
     expect(published.stops[0].html).toContain(`<p>${TEXT}</p>`);
     expect(published.stops[0].html).toMatch(new RegExp(`<img src="/api/v1/visit/tours/${SLUG}/media/\\d+/display" alt="${ALT}"`));
     expect(published.stops[0].cautions.length).toBeGreaterThan(0);
+    expect(published.stops[0].html).toMatch(/<figure data-explainer="boiling-ladder" data-config="[^"]+" class="explainer"><figcaption>[^<]+<\/figcaption><\/figure>/);
   });
 });
