@@ -307,3 +307,5 @@ export const publicTour = publicTourSummary.extend({ stops: z.array(publicTourSt
 export type PublicTour = z.infer<typeof publicTour>;
 export const publicTourList = z.array(publicTourSummary).meta({ id: 'PublicTourList' });
 export const slugParam = z.object({ slug: z.string().max(80) });
+export type TourRouteSettings = z.infer<typeof tourRouteSettings>;
+export type UpdateTourRouteSettingsBody = z.infer<typeof updateTourRouteSettingsBody>;

@@ -1,6 +1,6 @@
 import type { Page } from '@shared/schemas/common';
 import type { Media } from '@shared/schemas/media';
-import type { CreateStopBody, CreateTourBody, PublishCheck, RevisionCompare, Tour, TourComment, TourRevisionSummary, TourListItem, ToursQuery, UpdateStopBody, UpdateTourBody } from '@shared/schemas/tours';
+import type { CreateStopBody, CreateTourBody, PublishCheck, RevisionCompare, Tour, TourComment, TourRevisionSummary, TourListItem, ToursQuery, TourRouteSettings, UpdateStopBody, UpdateTourBody, UpdateTourRouteSettingsBody } from '@shared/schemas/tours';
 import { api, apiUrl, upload } from './client';
 
 export const listTours = (vesselId: number, params: Partial<ToursQuery>) => api.get<Page<TourListItem>>(`/vessels/${vesselId}/tours`, params);
@@ -26,3 +26,5 @@ export const compareRevisions = (id: number, from: number, to: number) => api.ge
 export const restoreRevision = (id: number, number: number, version: number) => api.post<Tour>(`/tours/${id}/revisions/${number}/restore`, { version });
 
 export const placardsUrl = (id: number, query: { stop?: number; sheet?: 'true' } = {}) => apiUrl(`/tours/${id}/placards.pdf`, query);
+export const getRouteSettings = (vesselId: number) => api.get<TourRouteSettings>(`/vessels/${vesselId}/tour-route-settings`);
+export const updateRouteSettings = (vesselId: number, body: UpdateTourRouteSettingsBody) => api.put<TourRouteSettings>(`/vessels/${vesselId}/tour-route-settings`, body);
