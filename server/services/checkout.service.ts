@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 import Stripe from 'stripe';
 import { formatCents } from '../../shared/calc/money.js';
 import { netCents } from '../../shared/calc/giving-ledger.js';
+import { excerpt } from '../../shared/richtext/excerpt.js';
 import type { CheckoutBody } from '../../shared/schemas/donations.js';
 import type { PublicAppeal, PublicAppealSummary, PublicGiftStatus } from '../../shared/schemas/visit.js';
 import type { AppealEntity } from '../db/entities/appeal.entity.js';
@@ -37,7 +38,7 @@ export class CheckoutService {
       slug: project.slug,
       title: project.title,
       vesselName: vessel?.name ?? '',
-      summary: appeal.storyText.slice(0, 240),
+      summary: excerpt(appeal.storyText, 240),
       coverPhoto: cover ? { url: publicPhotoUrl(project.slug, cover.mediaId), altText: cover.altText } : null,
       currency,
       goalCents: appeal.goalCents,
