@@ -2,9 +2,11 @@ import { randomUUID } from 'node:crypto';
 import Stripe from 'stripe';
 import { formatCents } from '../../shared/calc/money.js';
 import { netCents } from '../../shared/calc/giving-ledger.js';
+import { excerpt } from '../../shared/richtext/excerpt.js';
 import type { CheckoutBody } from '../../shared/schemas/donations.js';
 import type { PublicAppeal, PublicAppealSummary, PublicGiftStatus } from '../../shared/schemas/visit.js';
 import type { AppealEntity } from '../db/entities/appeal.entity.js';
+import type { MediaEntity } from '../db/entities/media.entity.js';
 import type { AppealWithProject } from '../db/repositories/appeal.repository.js';
 import type { Store } from '../db/store.js';
 import { NotFoundError, ServiceUnavailableError, UnprocessableError } from '../http/errors.js';
@@ -30,14 +32,25 @@ export class CheckoutService {
     private readonly publicUrl: string,
   ) {}
 
-  private async summary({ appeal, project }: AppealWithProject, currency: string): Promise<PublicAppealSummary> {
+  /**
+   * The appeal's photos that may still be shown: a photo withdrawn from public use (or whose alt
+   * text was emptied, or that was deleted) after the appeal was published leaves the public page.
+   */
+  private async shownPhotos(appeal: AppealEntity) {
+    if (!appeal.photos.length) return [];
+    const media = await this.store.repos.media.findByIds(appeal.photos.map((p) => p.mediaId));
+    const allowed = new Set(media.filter((m) => isPublicPhoto(m, appeal.vesselId)).map((m) => m.id));
+    return appeal.photos.filter((p) => allowed.has(p.mediaId));
+  }
+
+  private async summary({ appeal, project }: AppealWithProject, currency: string, photos?: AppealEntity['photos']): Promise<PublicAppealSummary> {
     const vessel = await this.store.repos.vessels.findById(appeal.vesselId);
-    const cover = appeal.photos[0];
+    const cover = (photos ?? (await this.shownPhotos(appeal)))[0];
     return {
       slug: project.slug,
       title: project.title,
       vesselName: vessel?.name ?? '',
-      summary: appeal.storyText.slice(0, 240),
+      summary: excerpt(appeal.storyText, 240),
       coverPhoto: cover ? { url: publicPhotoUrl(project.slug, cover.mediaId), altText: cover.altText } : null,
       currency,
       goalCents: appeal.goalCents,
@@ -61,12 +74,13 @@ export class CheckoutService {
   async get(slug: string): Promise<PublicAppeal> {
     const found = await this.published(slug);
     const settings = await this.store.repos.settings.get();
+    const photos = await this.shownPhotos(found.appeal);
     const recent = await this.store.repos.donations.recentReceived(found.appeal.id, RECENT_GIFTS);
     const { minimumCents, maximumCents, presetCents } = settings.giving;
     return {
-      ...(await this.summary(found, settings.currency)),
+      ...(await this.summary(found, settings.currency, photos)),
       storyHtml: found.appeal.storyHtml,
-      photos: found.appeal.photos.map((p) => ({ url: publicPhotoUrl(slug, p.mediaId), altText: p.altText, caption: p.caption })),
+      photos: photos.map((p) => ({ url: publicPhotoUrl(slug, p.mediaId), altText: p.altText, caption: p.caption })),
       recentGifts: recent.map((d) => ({ name: d.showFirstName && !d.anonymous ? firstName(d.donorName) : 'Anonymous', at: (d.succeededAt ?? d.createdAt).toISOString() })),
       giving: { minimumCents, maximumCents, presetCents },
     };
@@ -77,7 +91,7 @@ export class CheckoutService {
     const found = await this.published(slug);
     if (!found.appeal.photos.some((p) => p.mediaId === mediaId)) throw new NotFoundError('The photo');
     const media = await this.store.repos.media.findById(mediaId);
-    if (!media || media.kind !== 'photo' || media.vesselId !== found.appeal.vesselId) throw new NotFoundError('The photo');
+    if (!media || !isPublicPhoto(media, found.appeal.vesselId)) throw new NotFoundError('The photo');
     return media;
   }
 
@@ -164,4 +178,8 @@ export class CheckoutService {
     const status = ({ pending: 'pending', succeeded: 'received', partially_refunded: 'received', failed: 'failed', expired: 'expired', refunded: 'refunded' } as const)[donation.status];
     return { status, amountCents: donation.amountCents, currency: donation.currency, projectTitle: found?.project.title ?? '', slug: found?.project.slug ?? '', failureMessage: donation.failureMessage };
   }
+}
+
+function isPublicPhoto(media: MediaEntity, vesselId: number): boolean {
+  return media.kind === 'photo' && media.vesselId === vesselId && media.publicUse && media.altText.trim().length > 0;
 }

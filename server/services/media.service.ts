@@ -120,6 +120,8 @@ export class MediaService {
       return { path: this.files.path(path.join(media.storageKey, `original.${EXTENSIONS[media.mimeType]}`)), type: media.mimeType.split(';')[0]!, name: media.fileName };
     }
     if (media.kind !== 'photo') throw new NotFoundError('A preview of this file');
+    // published pages keep pointing at a photo someone has since withdrawn from public use
+    if (!media.publicUse || !media.altText.trim()) throw new NotFoundError('The file');
     return { path: derivativeFile(this.files.path(media.storageKey), variant), type: 'image/webp', name: `${path.parse(media.fileName).name}-${variant}.webp` };
   }
 

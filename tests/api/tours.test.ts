@@ -304,4 +304,21 @@ describe('tours', () => {
     expect(script.status).toBe(422);
     expect(script.body.error.code).toBe('invalid_rich_text');
   });
+
+  it('stops serving a published tour’s photo once it is withdrawn from public use', async () => {
+    const upload = await curator.agent.post(`/api/v1/media?ownerType=compartment&ownerId=${place.first}`).set('x-csrf-token', curator.csrf).attach('file', await cameraJpeg(), 'store.jpg');
+    expect(upload.status).toBe(201);
+    const marked = await curator.patch(`/api/v1/media/${upload.body.id}`, { altText: 'Shelves of spare gauge glasses', publicUse: true, version: upload.body.version });
+    expect(marked.status, JSON.stringify(marked.body)).toBe(200);
+    const image = { type: 'image', attrs: { src: `/api/v1/media/${upload.body.id}/display`, alt: 'Shelves of spare gauge glasses' } };
+    const tour = await addStop((await newTour()).id, { textDoc: { type: 'doc', content: [image] } });
+    const submitted = await docent.post(`/api/v1/tours/${tour.id}/submit`, { version: tour.version });
+    expect(submitted.status, JSON.stringify(submitted.body)).toBe(200);
+    expect((await curator.post(`/api/v1/tours/${tour.id}/approve`, { version: submitted.body.version })).status).toBe(200);
+    const url = `/api/v1/visit/tours/below-the-waterline/media/${upload.body.id}/display`;
+    const anonymous = new Client(ctx.app);
+    expect((await anonymous.get(url)).status).toBe(200);
+    await curator.patch(`/api/v1/media/${upload.body.id}`, { publicUse: false, version: marked.body.version });
+    expect((await anonymous.get(url)).status).toBe(404);
+  });
 });
