@@ -28,6 +28,7 @@ describe('a visitor takes a published tour', () => {
     await page.getByRole('heading', { level: 1, name: 'The main deck, step-free' }).waitFor();
     const route = page.getByRole('list').filter({ hasText: 'The forward saloon' });
     expect(await route.textContent()).toContain('Tickets and letters');
+    await screenshot(page, 'visit-tour');
     await page.getByRole('link', { name: 'Start the tour' }).click();
 
     await page.waitForURL(`**${TOUR}/stops/1`);
@@ -72,11 +73,14 @@ describe('a visitor takes a published tour', () => {
     await page.goto(`${TOUR}/stops/1`);
     await page.getByRole('heading', { level: 1, name: 'The forward saloon' }).waitFor();
     const standard = await fontSize(page, '.stop__html p');
+    const plain = await fontSize(page, '.stop__facts dd');
     expect(await horizontalOverflow(page)).toBe(0);
 
     await page.getByRole('button', { name: 'Largest text' }).click();
     await expect.poll(() => fontSize(page, '.stop__html p')).toBeGreaterThan(standard * 1.3);
     expect(await page.getByRole('button', { name: 'Largest text' }).getAttribute('aria-pressed')).toBe('true');
+    // text that only inherits its size follows too
+    expect(await fontSize(page, '.stop__facts dd')).toBeGreaterThan(plain * 1.3);
     expect(await horizontalOverflow(page)).toBe(0);
     await screenshot(page, 'visit-stop-375-largest');
 
@@ -90,6 +94,7 @@ describe('a visitor takes a published tour', () => {
     await page.goto('/visit');
     await page.getByRole('link', { name: 'The main deck, step-free' }).waitFor();
     expect(await horizontalOverflow(page)).toBe(0);
+    await screenshot(page, 'visit-home-375-largest');
 
     await page.goto(TOUR);
     await page.getByRole('button', { name: 'Standard text' }).click();
