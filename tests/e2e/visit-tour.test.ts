@@ -54,6 +54,7 @@ describe('a visitor takes a published tour', () => {
     await page.goto(`${TOUR}/stops/2?here=1`);
     await page.getByRole('heading', { level: 1, name: 'Tickets and letters' }).waitFor();
     expect(await page.getByRole('status').filter({ hasText: 'You are here' }).isVisible()).toBe(true);
+    await screenshot(page, 'visit-stop-here-390');
     await page.goto(`${TOUR}/stops/2`);
     await page.getByRole('heading', { level: 1, name: 'Tickets and letters' }).waitFor();
     expect(await page.getByText('You are here').count()).toBe(0);
