@@ -8,7 +8,7 @@ const MUTED = '#5b6770';
 
 /** The address a stop's code leads to on the public site. */
 export function stopUrl(publicUrl: string, slug: string, number: number): string {
-  return `${publicUrl}/visit/tours/${encodeURIComponent(slug)}/stops/${number}`;
+  return `${publicUrl}/visit/tours/${encodeURIComponent(slug)}/stops/${number}?here=1`;
 }
 
 /** The words of a stop's stored HTML, ours and sanitized, as plain text. */

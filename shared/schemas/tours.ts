@@ -2,24 +2,15 @@ import { z } from 'zod';
 import { listQuery, pageOf } from './common.js';
 import { hazardCautions } from './hazard-cautions.js';
 import { richTextDoc } from './rich-text.js';
+import { TOUR_ACCESSIBILITY, TOUR_AUDIENCES, TOUR_MODES } from '../tour-labels.js';
 import { freeText, line, refuseInvalidCharacters, text } from './text.js';
 
 export const TOUR_STATES = ['draft', 'in_review', 'published', 'retired'] as const;
 export type TourState = (typeof TOUR_STATES)[number];
 export const TOUR_STATE_LABELS: Record<TourState, string> = { draft: 'Draft', in_review: 'In review', published: 'Published', retired: 'Retired' };
 
-export const TOUR_MODES = ['on-board', 'virtual', 'both'] as const;
-export type TourMode = (typeof TOUR_MODES)[number];
-export const TOUR_MODE_LABELS: Record<TourMode, string> = { 'on-board': 'On board', virtual: 'Virtual', both: 'On board and virtual' };
-
-export const TOUR_ACCESSIBILITY = ['step-free', 'some-stairs', 'ladders'] as const;
-export type TourAccessibility = (typeof TOUR_ACCESSIBILITY)[number];
-export const TOUR_ACCESSIBILITY_LABELS: Record<TourAccessibility, string> = { 'step-free': 'Step-free', 'some-stairs': 'Some stairs', ladders: 'Ladders' };
-
-export const TOUR_AUDIENCES = ['general', 'families', 'technical'] as const;
-export type TourAudience = (typeof TOUR_AUDIENCES)[number];
-export const TOUR_AUDIENCE_LABELS: Record<TourAudience, string> = { general: 'General', families: 'Families', technical: 'Technical' };
-
+export { TOUR_ACCESSIBILITY, TOUR_ACCESSIBILITY_LABELS, TOUR_AUDIENCES, TOUR_AUDIENCE_LABELS, TOUR_MODES, TOUR_MODE_LABELS } from '../tour-labels.js';
+export type { TourAccessibility, TourAudience, TourMode } from '../tour-labels.js';
 /** BCP 47 tags the tours are written in; one per tour for now. */
 export const TOUR_LANGUAGES = ['en', 'es', 'fr', 'de', 'nl', 'it', 'pt'] as const;
 

@@ -36,6 +36,8 @@ export const router = createRouter({
       component: VisitLayout,
       children: [
         { path: '', name: 'visit-home', component: VisitHomeView, meta: { title: 'Visit' } },
+        { path: 'tours/:slug', name: 'visit-tour', component: () => import('@/views/visit/VisitTourView.vue'), meta: { title: 'Tour' } },
+        { path: 'tours/:slug/stops/:n', name: 'visit-stop', component: () => import('@/views/visit/VisitStopView.vue'), meta: { title: 'Tour stop' } },
         { path: 'appeals', name: 'visit-appeals', component: () => import('@/views/visit/VisitAppealsView.vue'), meta: { title: 'Help us repair' } },
         { path: 'appeals/:slug', name: 'visit-appeal', component: () => import('@/views/visit/VisitAppealView.vue'), meta: { title: 'Help us repair' } },
         { path: 'appeals/:slug/thanks', name: 'visit-gift-thanks', component: () => import('@/views/visit/VisitGiftThanksView.vue'), meta: { title: 'Thank you' } },

@@ -16,6 +16,6 @@ describe('placard text', () => {
   });
 
   it('codes the public address of the stop', () => {
-    expect(stopUrl('https://ship.example', 'fire-and-steam', 3)).toBe('https://ship.example/visit/tours/fire-and-steam/stops/3');
+    expect(stopUrl('https://ship.example', 'fire-and-steam', 3)).toBe('https://ship.example/visit/tours/fire-and-steam/stops/3?here=1');
   });
 });
