@@ -149,8 +149,8 @@ export function createApp({ config, dataSource, fakeMail, stripe = createStripeC
   incidentRoutes(api, new IncidentService(store, conditionReports, alerts), closures);
   riskRoutes(api, new RiskService(store));
   repairProjectRoutes(api, new RepairProjectService(store), new TreatmentService(store));
-  interpretationRoutes(api, new InterpretationService(store, mailer, config));
   const media = new MediaService(store, files);
+  interpretationRoutes(api, new InterpretationService(store, mailer, config), media);
   mediaRoutes(api, media, { incomingDir: files.incoming, maxBytes: config.mediaMaxBytes });
   const tours = new TourService(store, closures);
   tourRoutes(api, tours, media, { incomingDir: files.incoming, maxBytes: config.mediaMaxBytes });

@@ -1,3 +1,4 @@
+import { z } from 'zod';
 import { idParam } from '../../shared/schemas/common.js';
 import {
   interpretation,
@@ -16,6 +17,7 @@ import type { ApiRouter } from '../http/api-router.js';
 import { allowed, anyone } from '../http/access.js';
 import { actorOf } from '../services/audit.service.js';
 import type { InterpretationService } from '../services/interpretation.service.js';
+import type { MediaService } from '../services/media.service.js';
 
 const SUBJECTS: { type: InterpretationSubject; base: string; noun: string }[] = [
   { type: 'artifact', base: '/artifacts/:id/interpretation', noun: 'an artifact' },
@@ -23,7 +25,7 @@ const SUBJECTS: { type: InterpretationSubject; base: string; noun: string }[] = 
 ];
 
 /** Interpretive text of artifacts and compartments, its review, and the public read of what is published. */
-export function interpretationRoutes(api: ApiRouter, interpretations: InterpretationService) {
+export function interpretationRoutes(api: ApiRouter, interpretations: InterpretationService, media: MediaService) {
   const tag = 'Interpretation';
 
   api.route({
@@ -139,6 +141,24 @@ export function interpretationRoutes(api: ApiRouter, interpretations: Interpreta
       response: publicInterpretation,
       errors: [404],
       handler: ({ params }) => interpretations.publicRead(type, params.id),
+    });
+
+    api.route({
+      method: 'get',
+      path: `/visit${base}/media/:mediaId/:variant`,
+      tag: 'Visit',
+      summary: `A photo (WebP \`thumb\` or \`display\`) of ${noun}'s published interpretive text; only the photos that text shows, while they are marked for public use and have alt text`,
+      access: anyone,
+      params: idParam.extend({ mediaId: z.coerce.number().int().positive(), variant: z.enum(['thumb', 'display']) }),
+      produces: 'image/webp',
+      errors: [404],
+      handler: async ({ params, res }) => {
+        await interpretations.assertPublishedPhoto(type, params.id, params.mediaId);
+        const file = await media.publicFile(params.mediaId, params.variant);
+        res.setHeader('Cache-Control', 'public, max-age=3600');
+        res.setHeader('Content-Type', file.type);
+        await new Promise<void>((resolve, reject) => res.sendFile(file.path, (err) => (err ? reject(err) : resolve())));
+      },
     });
   }
 }

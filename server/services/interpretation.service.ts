@@ -26,6 +26,7 @@ import { interpretationReviewMail } from '../mail/templates.js';
 import { presentInterpretation, sameTexts } from '../presenters/interpretation.presenter.js';
 import { renderRichText } from '../richtext/render.js';
 import { recordAudit, type Actor } from './audit.service.js';
+import { imageIdsIn, pointImagesAt, withoutImages } from './public-media-html.js';
 
 interface Subject {
   type: InterpretationSubject;
@@ -58,6 +59,27 @@ export function renderTexts(body: SaveInterpretationBody): InterpretationTexts {
     if (parts.label || parts.story) out[audience] = parts;
   }
   return out;
+}
+
+/** Where visitors load a photo of a published text: a route that serves only the photos that text shows. */
+export function interpretationMediaPath(type: InterpretationSubject, subjectId: number, mediaId: number, variant: 'display' | 'thumb'): string {
+  return `/api/v1/visit/${type === 'artifact' ? 'artifacts' : 'compartments'}/${subjectId}/interpretation/media/${mediaId}/${variant}`;
+}
+
+/** The texts as published: the same documents, their HTML's images pointed at the public route (staff keep the documents' own paths). */
+export function publishedTexts(texts: InterpretationTexts, type: InterpretationSubject, subjectId: number): InterpretationTexts {
+  const out = structuredClone(texts);
+  for (const audience of AUDIENCES) {
+    for (const part of INTERPRETATION_PARTS) {
+      const rendered = out[audience]?.[part];
+      if (rendered) rendered.html = pointImagesAt(rendered.html, (id, variant) => interpretationMediaPath(type, subjectId, id, variant));
+    }
+  }
+  return out;
+}
+
+function publishedHtml(texts: InterpretationTexts): string[] {
+  return AUDIENCES.flatMap((a) => INTERPRETATION_PARTS.map((p) => texts[a]?.[p]?.html ?? '')).filter(Boolean);
 }
 
 function isEmpty(texts: InterpretationTexts): boolean {
@@ -253,7 +275,7 @@ export class InterpretationService {
       const problems = await this.publishProblems(repos, subject, record.draft);
       if (problems.length) throw new UnprocessableError(problems.join(' '), { draft: problems.join('\n') });
       const authorId = record.state === 'in-review' ? record.submittedById : null;
-      record.published = structuredClone(record.draft);
+      record.published = publishedTexts(record.draft, type, id);
       record.publishedAt = new Date();
       record.publishedById = viewer.id;
       record.state = 'published';
@@ -327,17 +349,33 @@ export class InterpretationService {
     return { ...page, items };
   }
 
-  /** The published snapshot only, for visitors; 404 when nothing is published. */
-  async publicRead(type: InterpretationSubject, id: number): Promise<PublicInterpretation> {
+  private async publishedRecord(type: InterpretationSubject, id: number) {
     const repos = this.store.repos;
     const subject = await this.subject(repos, type, id).catch(() => null);
     const record = subject?.public ? await repos.interpretations.findFor(type, id) : null;
     if (!subject || !record?.published || !record.publishedAt) throw new NotFoundError('Published interpretation');
-    const published = record.published;
+    // Texts published before images pointed at the public route are pointed there as they are read.
+    return { subject, publishedAt: record.publishedAt, published: publishedTexts(record.published, type, id) };
+  }
+
+  /**
+   * The published snapshot only, for visitors; 404 when nothing is published. Photos since
+   * withdrawn from public use (or left without alt text) are left out rather than shown broken.
+   */
+  async publicRead(type: InterpretationSubject, id: number): Promise<PublicInterpretation> {
+    const { subject, publishedAt, published } = await this.publishedRecord(type, id);
+    const hidden = await this.store.repos.media.hiddenPhotos(publishedHtml(published).flatMap(imageIdsIn));
+    const html = (part: { html: string } | null | undefined) => (part ? withoutImages(part.html, hidden) : null);
     const audiences = Object.fromEntries(
-      AUDIENCES.map((a) => [a, published[a] ? { label: published[a].label?.html ?? null, story: published[a].story?.html ?? null } : null]),
+      AUDIENCES.map((a) => [a, published[a] ? { label: html(published[a].label), story: html(published[a].story) } : null]),
     ) as PublicInterpretation['audiences'];
-    return { subjectType: type, subjectId: id, title: subject.title, publishedAt: record.publishedAt.toISOString(), audiences };
+    return { subjectType: type, subjectId: id, title: subject.title, publishedAt: publishedAt.toISOString(), audiences };
+  }
+
+  /** Whether a published text shows this photo (the public file route serves only those); 404 otherwise. */
+  async assertPublishedPhoto(type: InterpretationSubject, id: number, mediaId: number): Promise<void> {
+    const { published } = await this.publishedRecord(type, id);
+    if (!publishedHtml(published).some((html) => imageIdsIn(html).includes(mediaId))) throw new NotFoundError('The file');
   }
 
   private async tell(people: { email: string; name: string }[], subject: string, lines: string[], path: string) {

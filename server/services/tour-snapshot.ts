@@ -3,6 +3,7 @@ import type { PublicTour, PublicTourStop, TourAccessibility, TourAudience, TourM
 import { VISITOR_CAUTION_DEFER, visitorCautions } from '../../shared/tour-cautions.js';
 import type { TourStopEntity } from '../db/entities/tour-stop.entity.js';
 import type { TourEntity } from '../db/entities/tour.entity.js';
+import { withoutImages, pointImagesAt } from './public-media-html.js';
 import type { TourContext } from './tour-context.js';
 
 /** A stop as published; `compartmentId` stays on the server, to show the stop as virtual while its space is closed. */
@@ -25,17 +26,12 @@ export function publicMediaPath(slug: string, mediaId: number, variant: 'thumb' 
   return `/api/v1/visit/tours/${slug}/media/${mediaId}/${variant}`;
 }
 
-const STAFF_MEDIA = /\/api\/v1\/media\/(\d+)\/(display|thumb)/g;
-
 /** The published form of a tour: the sanitized HTML stored at save, images pointed at the tour's public file route. */
 export function buildPublishedTour(tour: TourEntity, stops: TourStopEntity[], ctx: TourContext, vesselName: string, at: Date): PublishedTour {
   const mediaIds = new Set<number>();
   const published: PublishedStop[] = stops.map((stop, i) => {
     const c = ctx.compartments.get(stop.compartmentId);
-    const html = stop.textHtml.replace(STAFF_MEDIA, (_m, id: string, variant: 'display' | 'thumb') => {
-      mediaIds.add(Number(id));
-      return publicMediaPath(tour.slug, Number(id), variant);
-    });
+    const html = pointImagesAt(stop.textHtml, (id, variant) => publicMediaPath(tour.slug, id, variant), mediaIds);
     if (stop.audioMediaId) mediaIds.add(stop.audioMediaId);
     const cautions = visitorCautions(ctx.hazards.get(stop.compartmentId) ?? []).map((c) => c.text);
     return {
@@ -79,20 +75,33 @@ export function buildPublishedTour(tour: TourEntity, stops: TourStopEntity[], ct
 /**
  * The public answer from a published snapshot: nothing is rendered or sanitized here. A stop
  * published on board is shown as virtual, with a notice, while visitors may not enter its space.
+ * Photos since withdrawn from the public (`hidden`) are left out rather than shown broken.
  */
-export function publicTourOf(snapshot: PublishedTour, access: Map<number, AccessStatus>): PublicTour {
-  const { vesselId: _v, revision: _r, mediaIds: _m, stops, ...rest } = snapshot;
+export function publicTourOf(snapshot: PublishedTour, access: Map<number, AccessStatus>, hidden: ReadonlySet<number> = new Set()): PublicTour {
+  const { vesselId: _v, revision: _r, mediaIds: _m, stops, cover, ...rest } = snapshot;
   return {
     ...rest,
-    stops: stops.map(({ compartmentId, ...stop }) => {
+    cover: shownCover(cover, hidden),
+    stops: stops.map(({ compartmentId, html, ...stop }) => {
       const status = access.get(compartmentId);
       const closed = !stop.virtual && (status === undefined || status === 'staff-only' || status === 'sealed');
-      return { ...stop, virtual: stop.virtual || closed, notice: closed ? CLOSED_NOTICE : null };
+      return { ...stop, html: withoutImages(html, hidden), virtual: stop.virtual || closed, notice: closed ? CLOSED_NOTICE : null };
     }),
   };
 }
 
-export function publicSummaryOf(snapshot: PublishedTour) {
-  const { vesselId: _v, revision: _r, mediaIds: _m, stops: _s, ...rest } = snapshot;
-  return rest;
+/** The media id of a published tour's cover, read from its public path. */
+export function coverIdOf(snapshot: Pick<PublishedTour, 'cover'>): number | null {
+  const id = snapshot.cover ? /\/media\/(\d+)\//.exec(snapshot.cover.src)?.[1] : undefined;
+  return id ? Number(id) : null;
+}
+
+function shownCover(cover: PublishedTour['cover'], hidden: ReadonlySet<number>): PublishedTour['cover'] {
+  const id = coverIdOf({ cover });
+  return id !== null && hidden.has(id) ? null : cover;
+}
+
+export function publicSummaryOf(snapshot: PublishedTour, hidden: ReadonlySet<number> = new Set()) {
+  const { vesselId: _v, revision: _r, mediaIds: _m, stops: _s, cover, ...rest } = snapshot;
+  return { ...rest, cover: shownCover(cover, hidden) };
 }

@@ -321,4 +321,26 @@ describe('tours', () => {
     await curator.patch(`/api/v1/media/${upload.body.id}`, { publicUse: false, version: marked.body.version });
     expect((await anonymous.get(url)).status).toBe(404);
   });
+
+  it('leaves a withdrawn photo out of the published tour’s html, and shows it again once it is public', async () => {
+    const upload = await curator.agent.post(`/api/v1/media?ownerType=compartment&ownerId=${place.first}`).set('x-csrf-token', curator.csrf).attach('file', await cameraJpeg(), 'store.jpg');
+    const marked = await curator.patch(`/api/v1/media/${upload.body.id}`, { altText: 'Shelves of spare gauge glasses', publicUse: true, version: upload.body.version });
+    expect(marked.status, JSON.stringify(marked.body)).toBe(200);
+    const image = { type: 'image', attrs: { src: `/api/v1/media/${upload.body.id}/display`, alt: 'Shelves of spare gauge glasses' } };
+    const tour = await addStop((await newTour()).id, { textDoc: { type: 'doc', content: [image, { type: 'paragraph', content: [{ type: 'text', text: 'Spares.' }] }] } });
+    const submitted = await docent.post(`/api/v1/tours/${tour.id}/submit`, { version: tour.version });
+    expect((await curator.post(`/api/v1/tours/${tour.id}/approve`, { version: submitted.body.version })).status).toBe(200);
+    const anonymous = new Client(ctx.app);
+    const src = `/api/v1/visit/tours/below-the-waterline/media/${upload.body.id}/display`;
+    const shown = await anonymous.get('/api/v1/visit/tours/below-the-waterline');
+    expect(shown.body.stops[0].html).toBe(`<img src="${src}" alt="Shelves of spare gauge glasses" /><p>Spares.</p>`);
+    const withdrawn = await curator.patch(`/api/v1/media/${upload.body.id}`, { publicUse: false, version: marked.body.version });
+    expect(withdrawn.status).toBe(200);
+    expect((await anonymous.get('/api/v1/visit/tours/below-the-waterline')).body.stops[0].html).toBe('<p>Spares.</p>');
+    const noAlt = await curator.patch(`/api/v1/media/${upload.body.id}`, { publicUse: true, altText: '', version: withdrawn.body.version });
+    expect(noAlt.status, JSON.stringify(noAlt.body)).toBe(200);
+    expect((await anonymous.get('/api/v1/visit/tours/below-the-waterline')).body.stops[0].html).toBe('<p>Spares.</p>');
+    await curator.patch(`/api/v1/media/${upload.body.id}`, { altText: 'Shelves of spare gauge glasses', version: noAlt.body.version });
+    expect((await anonymous.get('/api/v1/visit/tours/below-the-waterline')).body.stops[0].html).toContain(`<img src="${src}"`);
+  });
 });

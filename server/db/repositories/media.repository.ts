@@ -37,6 +37,21 @@ export class MediaRepository {
     return new Map(rows.map((m) => [m.id, m.altText]));
   }
 
+  /**
+   * Of the given ids, the photos the public may no longer see (not marked for public use, no alt
+   * text, or gone), in one query; audio and documents are not photos and are left out.
+   */
+  async hiddenPhotos(ids: number[]): Promise<Set<number>> {
+    const wanted = [...new Set(ids)];
+    if (!wanted.length) return new Set();
+    const rows = await this.repo.find({ select: { id: true, kind: true, publicUse: true, altText: true }, where: { id: In(wanted) } });
+    const found = new Map(rows.map((m) => [m.id, m]));
+    return new Set(wanted.filter((id) => {
+      const m = found.get(id);
+      return !m || (m.kind === 'photo' && (!m.publicUse || !m.altText.trim()));
+    }));
+  }
+
   create(fields: Omit<MediaEntity, 'id' | 'vessel' | 'uploadedBy' | 'createdAt' | 'updatedAt' | 'version'>) {
     return this.repo.save(this.repo.create(fields));
   }

@@ -5,6 +5,8 @@ export interface DemoInterpretation {
   /** An artifact's object number, or a compartment's designation. */
   subject: string;
   texts: Partial<Record<Audience, { label?: string[]; story?: string[]; ladder?: boolean }>>;
+  /** Open the general story with the artifact's first photo (when it is marked for public use and has alt text). */
+  photo?: boolean;
   /** What happens after the docent writes it: published by a curator, left in review, returned, or left a draft. */
   outcome: 'published' | 'in-review' | 'returned' | 'draft' | 'published-then-redrafted';
   returnComment?: string;
@@ -16,6 +18,7 @@ export const DEMO_INTERPRETATIONS: DemoInterpretation[] = [
   {
     subject: '1998.1.1',
     outcome: 'published',
+    photo: true,
     texts: {
       general: {
         label: ['This is the engine that drove the ship for sixty years. Steam pushed three pistons in turn, each bigger than the last, and the same steam did the work three times before it was spent.'],

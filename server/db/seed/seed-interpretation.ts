@@ -52,7 +52,13 @@ export async function seedDemoInterpretation(dataSource: DataSource, config: Con
     if (!room && !artifact) continue;
     const type = room ? ('compartment' as const) : ('artifact' as const);
     const id = room ?? artifact!.id;
-    let record = await service.save(type, id, bodyOf(demo.texts, 0), docent, asDocent);
+    const body = bodyOf(demo.texts, 0);
+    const photo = demo.photo && artifact ? await store.repos.media.firstPhoto('artifact', artifact.id) : null;
+    const story = body.general?.story;
+    if (photo?.publicUse && photo.altText.trim() && story) {
+      story.content = [{ type: 'image', attrs: { src: `/api/v1/media/${photo.id}/display`, alt: photo.altText } }, ...(story.content ?? [])];
+    }
+    let record = await service.save(type, id, body, docent, asDocent);
     if (demo.outcome === 'draft') continue;
     record = await service.submit(type, id, record.version, docent, asDocent);
     if (demo.outcome === 'in-review') continue;
