@@ -60,6 +60,20 @@ describe('a visitor takes a published tour', () => {
     expect(await page.getByText('You are here').count()).toBe(0);
   });
 
+  it('draws the boiling ladder of a stop as a diagram above its sentence', async () => {
+    const visitor = await openBrowser({ width: 1280, height: 900 });
+    browsers.push(visitor);
+    const { page } = visitor;
+    // The evaporator stop of the demo's engine-room tour carries a boiling-ladder explainer.
+    await page.goto('/visit/tours/fire-and-steam/stops/3');
+    const figure = page.locator('.stop__html figure[data-explainer="boiling-ladder"]');
+    await expect.poll(() => figure.locator('svg[role="img"]').count()).toBe(1);
+    const rungs = await figure.locator('svg text').allTextContents();
+    expect(rungs.some((t) => /^\d+ °[FC]$/.test(t))).toBe(true);
+    expect(await figure.locator('figcaption').textContent()).toMatch(/boils at/);
+    await screenshot(page, 'visit-stop-boiling-ladder');
+  });
+
   it('answers an unknown tour with its own page', async () => {
     const visitor = await openBrowser({ width: 390, height: 844 });
     browsers.push(visitor);
